@@ -1,0 +1,26 @@
+import { defineConfig } from '@mikro-orm/postgresql';
+import { Migrator } from '@mikro-orm/migrations';
+import { entities } from './src/lib/server/db/entities';
+import { config } from './src/lib/server/config';
+
+/**
+ * The one ORM configuration, used by the app, the tests and the MikroORM CLI
+ * (`npm run db -- orm migration:create --name add-leads`).
+ */
+export default defineConfig({
+  clientUrl: config.databaseUrl,
+  entities,
+  extensions: [Migrator],
+  // Entities declare their types explicitly; no reflection at run time.
+  discovery: { requireEntitiesArray: true },
+  migrations: {
+    path: './migrations',
+    pathTs: './migrations',
+    emit: 'ts',
+    // Diff against the real database, not a snapshot file, so parallel branches cannot drift.
+    snapshot: false,
+    transactional: true,
+    allOrNothing: true,
+  },
+  pool: { min: 0, max: 10 },
+});

@@ -1,0 +1,83 @@
+// `npm start`: set up everything on a fresh machine, then serve the app with the demo data.
+// `npm run dev` does the same with Astro's dev server (hot reload) instead of the build.
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { ensureNodeModules, ensurePostgres, fail, log, portInUse, root } from './lib/setup.mjs';
+import { ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
+import { dataDir, devClusterDir } from './lib/dev-cluster.mjs';
+import { appEnv, buildIfNeeded, runDbTasks, startChild, stopChildren } from './lib/services.mjs';
+
+const dev = process.argv.includes('--dev');
+const appPort = Number(process.env.PORT || 4321);
+const host = process.env.HOST || '127.0.0.1';
+const pgPort = Number(process.env.LAPWING_PG_PORT || 54329);
+const s3Port = Number(process.env.LAPWING_S3_PORT || 4569);
+const smtpPort = Number(process.env.LAPWING_SMTP_PORT || 2525);
+
+ensureNodeModules();
+const binDir = ensurePostgres();
+
+// The data lives in .data/ (git-ignored).
+const pgDir = devClusterDir();
+mkdirSync(dataDir, { recursive: true });
+
+for (const [name, port] of [['app', appPort], ['PostgreSQL', pgPort], ['S3 stand-in', s3Port], ['SMTP stand-in', smtpPort]]) {
+  if (await portInUse(port)) fail(`Port ${port} (${name}) is taken. Stop what uses it, or set PORT / LAPWING_PG_PORT / LAPWING_S3_PORT / LAPWING_SMTP_PORT.`);
+}
+
+const secretFile = path.join(dataDir, 'app-secret');
+if (!existsSync(secretFile)) writeFileSync(secretFile, randomBytes(32).toString('base64url'), { mode: 0o600 });
+const appSecret = readFileSync(secretFile, 'utf8').trim();
+
+const cluster = initCluster({ binDir, dir: pgDir, port: pgPort });
+startCluster(cluster);
+ensureDatabase(cluster, 'lapwing');
+
+const mailDir = path.join(dataDir, 'mail');
+const env = { ...appEnv({ cluster, database: 'lapwing', s3Port, smtpPort, appPort, appSecret, mailDir }), HOST: host };
+
+let shuttingDown = false;
+async function shutdown(code) {
+  if (shuttingDown) return;
+  shuttingDown = true;
+  log('Stopping…');
+  await stopChildren();
+  stopCluster(cluster);
+  log('Stopped. The data is kept in .data/ (delete that folder to start over).');
+  process.exit(code);
+}
+process.on('SIGINT', () => shutdown(0));
+process.on('SIGTERM', () => shutdown(0));
+
+try {
+  const standIns = startChild('stand-ins', process.execPath, ['scripts/stand-ins.mjs'], {
+    env: { ...env, STANDIN_DIR: dataDir, S3_PORT: String(s3Port), SMTP_PORT: String(smtpPort), APP_ORIGIN: env.PUBLIC_ORIGIN },
+    readyLine: 'stand-ins ready',
+    onExit: (code) => shutdown(code || 1),
+  });
+  await standIns.ready;
+
+  runDbTasks(env, ['migrate', 'seed-demo']);
+
+  if (!dev) buildIfNeeded(env);
+  const [command, args] = dev
+    ? [path.join(root, 'node_modules', '.bin', 'astro'), ['dev', '--host', host, '--port', String(appPort)]]
+    : [process.execPath, ['dist/server/entry.mjs']];
+  const server = startChild('app server', command, args, { env, onExit: (code) => shutdown(code || 1) });
+  await server.ready;
+} catch (error) {
+  process.stderr.write(`${error instanceof Error ? error.message : error}\n`);
+  await shutdown(1);
+}
+
+const origin = `http://${host}:${appPort}`;
+log(`Lapwing is starting at ${origin}
+    Landing page      ${origin}/
+    Staff sign-in     ${origin}/login
+    Demo firm page    ${origin}/demo/cedar-hollow
+    Demo sign-ins (password lapwing-demo-2026):
+      olive@cedar-hollow.test (owner), sam@cedar-hollow.test and rhea@cedar-hollow.test (sales)
+      nora@northgate.test (owner of the second firm)
+    PostgreSQL 127.0.0.1:${pgPort} · S3 stand-in 127.0.0.1:${s3Port} · SMTP stand-in 127.0.0.1:${smtpPort}
+    E-mails the app sends are kept in .data/mail/ · Ctrl-C stops everything`);

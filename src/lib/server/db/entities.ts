@@ -1,0 +1,6 @@
+// Every entity class the ORM knows. Add a new entity here (and create a migration).
+import { Company } from '../companies/company.entity';
+import { Membership } from '../users/membership.entity';
+import { User } from '../users/user.entity';
+
+export const entities = [Company, User, Membership];

@@ -1,0 +1,33 @@
+import { MikroORM } from '@mikro-orm/postgresql';
+import type { Migration } from '@mikro-orm/migrations';
+
+// Vite bundles the migrations into the server, because the migrator's own file loading uses a
+// native import() of .ts files that only works under tsx (the CLI), not in the built app or vitest.
+const migrationModules = import.meta.glob<Record<string, new (...args: never[]) => Migration>>(
+  '../../../../migrations/Migration*.ts',
+  { eager: true },
+);
+
+export const migrationsList = Object.entries(migrationModules)
+  .map(([file, module]) => {
+    const name = file.split('/').pop()!.replace(/\.ts$/, '');
+    return { name, class: module[name] as never };
+  })
+  .sort((a, b) => a.name.localeCompare(b.name));
+
+let ormPromise: Promise<MikroORM> | undefined;
+
+/** The process-wide ORM, initialised on first use. Requests use forks of its EntityManager. */
+export function getOrm(): Promise<MikroORM> {
+  ormPromise ??= (async () => {
+    const { default: options } = await import('../../../../mikro-orm.config');
+    return MikroORM.init({ ...options, migrations: { ...options.migrations, migrationsList } });
+  })();
+  return ormPromise;
+}
+
+/** Opens a separate ORM on another database (tests use it for throwaway databases). */
+export async function openOrm(clientUrl: string): Promise<MikroORM> {
+  const { default: options } = await import('../../../../mikro-orm.config');
+  return MikroORM.init({ ...options, clientUrl, migrations: { ...options.migrations, migrationsList } });
+}

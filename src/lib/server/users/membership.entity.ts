@@ -1,0 +1,17 @@
+import { Entity, ManyToOne, Property, Unique } from '@mikro-orm/core';
+import { TenantEntity } from '../db/base.entity';
+import type { User } from './user.entity';
+
+export const ROLES = ['owner', 'sales'] as const;
+export type Role = (typeof ROLES)[number];
+
+/** A person's place in one firm. A person may belong to several firms, with a role in each. */
+@Entity({ tableName: 'membership' })
+@Unique({ properties: ['company', 'user'] })
+export class Membership extends TenantEntity {
+  @ManyToOne({ entity: 'User', deleteRule: 'cascade', index: true })
+  user!: User;
+
+  @Property({ type: 'string', length: 16 })
+  role!: Role;
+}
