@@ -5,7 +5,7 @@ import { config } from './src/lib/server/config';
 
 /**
  * The one ORM configuration, used by the app, the tests and the MikroORM CLI
- * (`npm run db -- orm migration:create --name add-leads`).
+ * (`npm run db -- orm migration:create --name add_leads`).
  */
 export default defineConfig({
   clientUrl: config.databaseUrl,

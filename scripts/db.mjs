@@ -1,5 +1,5 @@
 // `npm run db -- <command>`: database chores against the development database of `npm start`.
-//   npm run db -- orm migration:create --name add-leads   (any MikroORM CLI command)
+//   npm run db -- orm migration:create --name add_leads   (any MikroORM CLI command)
 //   npm run db -- migrate | seed-demo                     (the tasks of scripts/db.ts)
 //   npm run db -- reset                                   (drop and recreate the dev database)
 // Uses the running cluster when `npm start` is up; otherwise starts it for the command.

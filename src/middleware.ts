@@ -1,11 +1,13 @@
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { RequestContext } from '@mikro-orm/core';
 import { getOrm } from './lib/server/db/orm';
+import { startMailWorker } from './lib/server/mail/worker';
 import type { EntityManager } from '@mikro-orm/postgresql';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
   const orm = await getOrm();
+  startMailWorker(orm);
   return RequestContext.create(orm.em, () => {
     context.locals.em = RequestContext.getEntityManager() as EntityManager;
     return next();

@@ -41,8 +41,10 @@ export function ensureNodeModules() {
   const stampPath = path.join(root, 'node_modules', '.lapwing-lock-hash');
   const lockHash = createHash('sha256').update(readFileSync(lockPath)).digest('hex');
   if (existsSync(stampPath) && readFileSync(stampPath, 'utf8') === lockHash) return;
-  log('Installing npm dependencies (npm ci)…');
-  run('npm', ['ci', '--no-audit', '--no-fund']);
+  // A clean install on a fresh clone; an in-place sync when node_modules exists but is stale.
+  const fresh = !existsSync(path.join(root, 'node_modules'));
+  log(`Installing npm dependencies (npm ${fresh ? 'ci' : 'install'})…`);
+  run('npm', [fresh ? 'ci' : 'install', '--no-audit', '--no-fund']);
   writeFileSync(stampPath, lockHash);
 }
 

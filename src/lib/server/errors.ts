@@ -1,0 +1,81 @@
+/**
+ * The one error vocabulary of the server. Domain code throws these; `errorResponse()` maps them to a
+ * status and the public JSON shape `{"error": "...", "fields": {"path": "message"}}`.
+ */
+export class AppError extends Error {
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly fields?: Record<string, string>,
+    readonly headers?: Record<string, string>,
+  ) {
+    super(message);
+    this.name = new.target.name;
+  }
+}
+
+/** The input is wrong; `fields` names each bad field by its path (`rooms.0.walls.1.length`). */
+export class InvalidInput extends AppError {
+  constructor(message = 'Some fields need attention.', fields: Record<string, string> = {}) {
+    super(message, 400, fields);
+  }
+}
+
+export class Unauthenticated extends AppError {
+  constructor(message = 'Please sign in.') {
+    super(message, 401);
+  }
+}
+
+/** Signed in, but this role may not do it. Never used for another firm's data: that is NotFound. */
+export class Forbidden extends AppError {
+  constructor(message = 'Your role does not allow this.') {
+    super(message, 403);
+  }
+}
+
+/** Missing, or belonging to another firm (the two look the same so ids are not confirmed). */
+export class NotFound extends AppError {
+  constructor(message = 'Not found.') {
+    super(message, 404);
+  }
+}
+
+export class Conflict extends AppError {
+  constructor(message: string, fields?: Record<string, string>) {
+    super(message, 409, fields);
+  }
+}
+
+export class UnsupportedMediaType extends AppError {
+  constructor(message = 'Send JSON (Content-Type: application/json).') {
+    super(message, 415);
+  }
+}
+
+export class TooManyRequests extends AppError {
+  constructor(message: string, retryAfterSeconds: number) {
+    super(message, 429, undefined, { 'Retry-After': String(Math.max(1, Math.ceil(retryAfterSeconds))) });
+  }
+}
+
+/** Turns a zod error into field paths and messages. */
+export function fieldsFromZod(issues: { path: PropertyKey[]; message: string }[]): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of issues) {
+    const path = issue.path.map(String).join('.') || '_';
+    fields[path] ??= issue.message;
+  }
+  return fields;
+}
+
+/** Maps any thrown value to a JSON response; unknown errors become a logged 500 with no detail. */
+export function errorResponse(error: unknown, extraHeaders: Record<string, string> = {}): Response {
+  if (error instanceof AppError) {
+    const body: { error: string; fields?: Record<string, string> } = { error: error.message };
+    if (error.fields && Object.keys(error.fields).length) body.fields = error.fields;
+    return Response.json(body, { status: error.status, headers: { ...error.headers, ...extraHeaders } });
+  }
+  console.error(error);
+  return Response.json({ error: 'Something went wrong on our side. Please try again.' }, { status: 500, headers: extraHeaders });
+}

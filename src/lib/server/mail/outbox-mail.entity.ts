@@ -1,0 +1,48 @@
+import { Entity, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
+import { BaseEntity } from '../db/base.entity';
+import type { Company } from '../companies/company.entity';
+
+export type OutboxStatus = 'queued' | 'sent' | 'failed';
+
+/**
+ * A message waiting to go out. Written in the same transaction as the change that caused it, so a
+ * lead or an invite and its e-mail are stored together, and an SMTP outage only delays the mail.
+ */
+@Entity({ tableName: 'mail_outbox' })
+@Index({ properties: ['status', 'nextAttemptAt'] })
+export class OutboxMail extends BaseEntity {
+  /** The firm the message is about, when there is one (password resets have none). */
+  @ManyToOne({ entity: 'Company', nullable: true, deleteRule: 'cascade', index: true })
+  company: Company | null = null;
+
+  @Property({ type: 'string', length: 254 })
+  toAddress!: string;
+
+  @Property({ type: 'string', length: 300 })
+  subject!: string;
+
+  @Property({ type: 'text' })
+  textBody!: string;
+
+  @Property({ type: 'text', nullable: true })
+  htmlBody: string | null = null;
+
+  /** Optional Reply-To, so a homeowner's answer reaches the firm rather than the no-reply sender. */
+  @Property({ type: 'string', length: 254, nullable: true })
+  replyTo: string | null = null;
+
+  @Property({ type: 'string', length: 8 })
+  status: OutboxStatus & Opt = 'queued';
+
+  @Property({ type: 'integer' })
+  attempts: number & Opt = 0;
+
+  @Property({ type: 'datetime' })
+  nextAttemptAt: Date & Opt = new Date();
+
+  @Property({ type: 'text', nullable: true })
+  lastError: string | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  sentAt: Date | null = null;
+}
