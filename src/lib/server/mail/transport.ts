@@ -6,13 +6,18 @@ export type SendMail = (message: OutgoingMail) => Promise<void>;
 
 /** A sender for one SMTP server (smtp:// or smtps:// URL). */
 export function createSmtpSender(smtpUrl: string): SendMail {
-  const transporter: Transporter = nodemailer.createTransport(smtpUrl, {
+  const url = new URL(smtpUrl);
+  const transporter: Transporter = nodemailer.createTransport({
+    host: url.hostname,
+    port: Number(url.port) || (url.protocol === 'smtps:' ? 465 : 587),
+    secure: url.protocol === 'smtps:',
+    auth: url.username ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } : undefined,
     // Short timeouts: an unreachable SMTP server must fail fast; the outbox retries later.
     connectionTimeout: 5_000,
     greetingTimeout: 5_000,
     socketTimeout: 10_000,
     // The local stand-in offers no TLS; a real provider is reached with smtps:// or STARTTLS.
-    ignoreTLS: smtpUrl.startsWith('smtp://127.0.0.1'),
+    ignoreTLS: url.protocol === 'smtp:' && url.hostname === '127.0.0.1',
   });
   return async (message) => {
     await transporter.sendMail({ from: config.mailFrom, ...message });
