@@ -1,0 +1,44 @@
+import { renderToStaticMarkup } from 'react-dom/server';
+import { describe, expect, it } from 'vitest';
+import { estimate, parseRateBook, sampleProject, sampleRateBook } from '../../lib/estimate/index.ts';
+import { WallDrawing } from './WallDrawing.tsx';
+
+const rateBook = parseRateBook(sampleRateBook());
+const e = estimate(sampleProject(), rateBook, { rateBookParsed: true });
+
+describe('WallDrawing', () => {
+  it('draws a shiplap wall to scale with its boards, boxes and dimensions', () => {
+    const wall = e.takeoff.rooms[1]!.walls[0]!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" treatmentName="Vertical shiplap" />);
+    expect(html).toContain('role="img"');
+    expect(html).toMatch(/<title id="[^"]+">Bed wall, drawn to scale<\/title>/);
+    expect(html).toMatch(/<desc id="[^"]+">Bed wall: 12&#x27; 6&quot; long/);
+    expect(html.match(/data-role="strip"/g)).toHaveLength(wall.pieces.filter((p) => p.role === 'strip').length);
+    expect(html.match(/data-kind="outlet"/g)).toHaveLength(2);
+    expect(html).toContain(`12&#x27; 6&quot;`); // length dimension
+    expect(html).toContain('#1F2A2E');
+    expect(html).toContain('DM Sans');
+    expect(html).toContain('tabular-nums');
+    // viewBox in inches: the wall is 150 in wide inside it
+    expect(html).toMatch(/<rect x="0" y="0" width="150" height="96"/);
+  });
+
+  it('leaves openings white and labels in the firm units', () => {
+    const wall = e.takeoff.rooms[0]!.walls[1]!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="metric" />);
+    expect(html).toMatch(/data-kind="door"[^>]*fill="#FFFFFF"/);
+    expect(html).toContain('3353 mm'); // 132 in × 25.4 = 3352.8 mm
+    expect(html).toMatch(/data-role="batten"/);
+    expect(html).toMatch(/data-role="cap-rail"/);
+    expect(html).toMatch(/data-role="baseboard"/);
+  });
+
+  it('shows the ripped last board', () => {
+    const project = sampleProject();
+    project.rooms[1]!.walls[0]!.length = 146;
+    const wall = estimate(project, rateBook, { rateBookParsed: true }).takeoff.rooms[1]!.walls[0]!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" />);
+    expect(wall.boards!.lastWidth).toBeLessThan(wall.boards!.boardWidth);
+    expect(html).toContain('class="ripped"');
+  });
+});

@@ -1,0 +1,180 @@
+/**
+ * One wall drawn to scale as a clean line elevation (SVG): boards with their gaps and the ripped last
+ * board, battens or frames, cap rail and baseboard, doors and windows left open, outlet and switch
+ * cut-outs, and dimension lines in the firm's units. Coordinates are inches with the floor at the
+ * bottom; the SVG scales to its container, so it stays readable on a phone.
+ */
+import { useId } from 'react';
+import type { Units, WallPiece, WallTakeoff } from '../../lib/estimate/index.ts';
+import { formatLength, wallSummary } from '../../lib/estimate/index.ts';
+
+export interface WallDrawingProps {
+  wall: WallTakeoff;
+  units: Units;
+  /** Shown in the text alternative, e.g. "Vertical shiplap". */
+  treatmentName?: string;
+  className?: string;
+}
+
+const INK = '#1F2A2E';
+const PAPER = '#FFFFFF';
+const WOOD = '#EEDFC0';
+const WOOD_TRIM = '#DCC59A';
+const GAP = '#6E5A3E';
+const SLATE = '#5B6B73';
+
+const FILL: Record<WallPiece['role'], string> = {
+  board: WOOD,
+  strip: WOOD,
+  panel: WOOD,
+  batten: WOOD_TRIM,
+  stile: WOOD_TRIM,
+  rail: WOOD_TRIM,
+  frame: 'none',
+  'cap-rail': WOOD_TRIM,
+  baseboard: WOOD_TRIM,
+};
+
+const r = (x: number): number => Math.round(x * 1000) / 1000;
+
+export function WallDrawing({ wall, units, treatmentName, className }: WallDrawingProps) {
+  const id = useId();
+  const titleId = `${id}-title`;
+  const descId = `${id}-desc`;
+  const L = wall.length;
+  const H = wall.ceilingHeight;
+  // Text and margins scale with the wall so labels keep the same size relative to the drawing.
+  const font = Math.max(L, H) * 0.032;
+  // Room for the dimension labels: feet-and-inches text is up to about seven characters.
+  const margin = font * 5.6;
+  const marginRight = font * 6.2;
+  const vbX = -margin;
+  const vbY = -font * 1.5;
+  const vbW = L + margin + marginRight;
+  const vbH = H + font * 1.5 + margin;
+  const y = (fromFloor: number): number => r(H - fromFloor);
+  const len = (x: number): string => formatLength(x, units);
+  const shiplap = wall.boards !== undefined;
+  const tick = font * 0.45;
+
+  const hDim = (x0: number, x1: number, atY: number, label: string, key: string) => (
+    <g key={key} className="dimension">
+      <line x1={r(x0)} y1={r(atY)} x2={r(x1)} y2={r(atY)} stroke={INK} strokeWidth={1} vectorEffect="non-scaling-stroke" />
+      <line x1={r(x0)} y1={r(atY - tick)} x2={r(x0)} y2={r(atY + tick)} stroke={INK} strokeWidth={1} vectorEffect="non-scaling-stroke" />
+      <line x1={r(x1)} y1={r(atY - tick)} x2={r(x1)} y2={r(atY + tick)} stroke={INK} strokeWidth={1} vectorEffect="non-scaling-stroke" />
+      <text x={r((x0 + x1) / 2)} y={r(atY + font * 1.25)} fontSize={r(font)} textAnchor="middle" fill={INK}>
+        {label}
+      </text>
+    </g>
+  );
+  const vDim = (y0: number, y1: number, atX: number, label: string, key: string, anchor: 'start' | 'end') => (
+    <g key={key} className="dimension">
+      <line x1={r(atX)} y1={y(y0)} x2={r(atX)} y2={y(y1)} stroke={INK} strokeWidth={1} vectorEffect="non-scaling-stroke" />
+      <line x1={r(atX - tick)} y1={y(y0)} x2={r(atX + tick)} y2={y(y0)} stroke={INK} strokeWidth={1} vectorEffect="non-scaling-stroke" />
+      <line x1={r(atX - tick)} y1={y(y1)} x2={r(atX + tick)} y2={y(y1)} stroke={INK} strokeWidth={1} vectorEffect="non-scaling-stroke" />
+      <text
+        x={r(anchor === 'end' ? atX - font * 0.5 : atX + font * 0.5)}
+        y={r((y(y0) + y(y1)) / 2 + font * 0.35)}
+        fontSize={r(font)}
+        textAnchor={anchor}
+        fill={INK}
+      >
+        {label}
+      </text>
+    </g>
+  );
+
+  const lastRipped = wall.boards && wall.boards.lastWidth < wall.boards.boardWidth - 1e-6;
+  const rippedPiece = lastRipped ? wall.pieces.filter((p) => p.ripped).at(-1) : undefined;
+
+  return (
+    <svg
+      className={className}
+      role="img"
+      aria-labelledby={`${titleId} ${descId}`}
+      viewBox={`${r(vbX)} ${r(vbY)} ${r(vbW)} ${r(vbH)}`}
+      width="100%"
+      preserveAspectRatio="xMidYMid meet"
+      style={{ fontFamily: "'DM Sans', system-ui, sans-serif", fontVariantNumeric: 'tabular-nums', maxWidth: '100%', height: 'auto' }}
+      data-wall={wall.label}
+    >
+      <title id={titleId}>{`${wall.label}, drawn to scale`}</title>
+      <desc id={descId}>{wallSummary(wall, units, treatmentName)}</desc>
+
+      {/* The wall */}
+      <rect x={0} y={0} width={r(L)} height={r(H)} fill={PAPER} stroke={INK} strokeWidth={1.25} vectorEffect="non-scaling-stroke" />
+
+      {/* Shiplap gaps read as darker lines: the band is dark and the boards sit on it. */}
+      {shiplap && (
+        <rect className="gaps" x={0} y={y(wall.bandTop)} width={r(L)} height={r(wall.bandTop - wall.bandBottom)} fill={GAP} />
+      )}
+
+      <g className="pieces">
+        {wall.pieces.map((p, i) => (
+          <rect
+            key={i}
+            data-role={p.role}
+            x={r(p.x)}
+            y={y(p.y + p.height)}
+            width={r(p.width)}
+            height={r(p.height)}
+            fill={FILL[p.role]}
+            stroke={p.role === 'frame' ? INK : shiplap && (p.role === 'board' || p.role === 'strip') ? 'none' : INK}
+            strokeWidth={p.role === 'frame' ? 1.25 : 0.5}
+            vectorEffect="non-scaling-stroke"
+          />
+        ))}
+      </g>
+
+      {/* Doors and windows are left open (white), outlined in ink. */}
+      <g className="openings">
+        {wall.openings.map((o, i) => (
+          <rect
+            key={i}
+            data-kind={o.kind}
+            x={r(o.offset)}
+            y={y(o.sillHeight + o.height)}
+            width={r(o.width)}
+            height={r(o.height)}
+            fill={PAPER}
+            stroke={INK}
+            strokeWidth={1}
+            strokeDasharray={o.assumed ? '4 3' : undefined}
+            vectorEffect="non-scaling-stroke"
+          />
+        ))}
+      </g>
+
+      {/* Outlet and switch cut-outs as small outlined rectangles. */}
+      <g className="boxes">
+        {wall.boxes.map((b, i) => (
+          <rect
+            key={i}
+            data-kind={b.kind}
+            data-covered={b.covered ? 'yes' : 'no'}
+            x={r(b.offset)}
+            y={y(b.bottom + b.height)}
+            width={r(b.width)}
+            height={r(b.height)}
+            fill={PAPER}
+            stroke={INK}
+            strokeWidth={1}
+            vectorEffect="non-scaling-stroke"
+          />
+        ))}
+      </g>
+
+      {/* Dimensions: length below, ceiling height on the left, covered band on the right. */}
+      {hDim(0, L, H + font * 1.2, len(L), 'length')}
+      {vDim(0, H, -font * 1.2, len(H), 'ceiling', 'end')}
+      {vDim(wall.bandBottom, wall.bandTop, L + font * 1.2, len(wall.bandTop - wall.bandBottom), 'band', 'start')}
+      {rippedPiece && wall.boards?.orientation === 'vertical' && (
+        <text className="ripped" x={r(rippedPiece.x + rippedPiece.width / 2)} y={r(-font * 0.4)} fontSize={r(font * 0.85)} textAnchor="middle" fill={SLATE}>
+          {`last ${len(rippedPiece.width)}`}
+        </text>
+      )}
+    </svg>
+  );
+}
+
+export default WallDrawing;

@@ -1,0 +1,210 @@
+import { fc, test as fcTest } from '@fast-check/vitest';
+import { describe, expect, it } from 'vitest';
+import { estimate, EstimateInputError, formatMoney, parseRateBook, projectSchema, sampleProject, sampleRateBook, type ProjectInput } from './index.ts';
+
+const rateBook = parseRateBook(sampleRateBook());
+
+function fieldsOf(fn: () => unknown): Record<string, string> {
+  try {
+    fn();
+  } catch (e) {
+    if (e instanceof EstimateInputError) return e.fields;
+    throw e;
+  }
+  throw new Error('expected an EstimateInputError');
+}
+
+function oneWall(length: number, treatment: string, height: 'wainscot' | 'full', extra: Partial<ProjectInput> = {}, outlets = 1): ProjectInput {
+  return {
+    rooms: [
+      {
+        name: 'Test room',
+        ceilingHeight: 96,
+        walls: [{ length, outlets, openings: [{ kind: 'window', width: 30, height: 48, sillHeight: 30, offset: 10 }] }],
+        treatment: { id: treatment, height },
+      },
+    ],
+    builtBefore1978: 'no',
+    measuredBy: 'homeowner-tape',
+    ...extra,
+  };
+}
+
+describe('estimate of the sample project (invented demo data)', () => {
+  const e = estimate(sampleProject(), sampleRateBook());
+
+  it('is plain JSON that survives a round trip', () => {
+    expect(JSON.parse(JSON.stringify(e))).toEqual(e);
+  });
+
+  it('adds up: every price line is quantity × unit price, and the lines make the total', () => {
+    const p = e.price;
+    for (const l of p.lines.filter((x) => x.group === 'materials' || x.group === 'extras')) expect(l.totalCents).toBe(l.quantity * l.unitCents);
+    for (const l of p.lines) expect(Number.isInteger(l.totalCents)).toBe(true);
+    expect(p.lines.reduce((s, l) => s + l.totalCents, 0)).toBe(p.totalCents);
+    expect(p.lowCents).toBeLessThanOrEqual(p.totalCents);
+    expect(p.highCents).toBeGreaterThanOrEqual(p.totalCents);
+    expect(p.lowCents % rateBook.roundingCents).toBe(0);
+    expect(p.highCents % rateBook.roundingCents).toBe(0);
+  });
+
+  it('says where each number came from', () => {
+    for (const l of e.price.lines) expect(l.basis.length).toBeGreaterThan(5);
+    for (const m of e.takeoff.materials) expect(m.basis.length).toBeGreaterThan(5);
+    expect(e.price.spread.basis).toMatch(/tape measure, with photos/);
+  });
+
+  it('takes off each wall: net = gross − openings, a cut-out and an extender per covered box', () => {
+    for (const room of e.takeoff.rooms) {
+      for (const w of room.walls) {
+        expect(w.netSqFt).toBeCloseTo(w.grossSqFt - w.openingsSqFt, 9);
+        expect(w.cutOuts).toBe(w.boxes.filter((b) => b.covered).length);
+      }
+    }
+    const extenders = e.takeoff.materials.find((m) => m.id === 'box-extenders');
+    expect(extenders?.quantity).toBe(e.takeoff.cutOuts);
+  });
+
+  it('gives the vertical shiplap wall its board count and last board', () => {
+    const bed = e.takeoff.rooms[1]!.walls[0]!;
+    // 150 in of 5-7/8 in strips with 1/8 in gaps: 25 strips use 149.875 in (computed here).
+    expect(bed.boards).toMatchObject({ count: 25, lastWidth: 5.875 });
+    // Source: TRADE.md §9 — 5-7/8 in strips with a 1/8 in kerf: 8 from a 48 in sheet width.
+    expect(e.takeoff.materials.find((m) => m.id === 'sheet:ply-4x8-quarter')?.piecesPerSheet).toBe(8);
+  });
+
+  it('formats money with Intl in the firm currency', () => {
+    expect(formatMoney(435000, 'USD', 'en-US')).toBe('$4,350.00');
+    expect(formatMoney(435000, 'EUR', 'de-DE')).toMatch(/4\.350,00/);
+    expect(e.price.rangeText).toMatch(/^\$[\d,]+ – \$[\d,]+$/);
+  });
+});
+
+describe('cautions', () => {
+  const ids = (p: ProjectInput): string[] => estimate(p, rateBook, { rateBookParsed: true }).takeoff.cautions.map((c) => c.id);
+
+  // Source: NEC 314.20 via TRADE.md §4 — a combustible (wood) finish needs boxes flush: any box under the finish → extender.
+  it('asks for box extenders and the breaker when boxes sit under a wood finish', () => {
+    expect(ids(oneWall(120, 'shiplap-vertical-ply', 'wainscot'))).toContain('electrical-boxes');
+    expect(ids(oneWall(120, 'shiplap-vertical-ply', 'wainscot', {}, 0))).not.toContain('electrical-boxes');
+    const c = estimate(oneWall(120, 'beadboard', 'wainscot'), rateBook, { rateBookParsed: true }).takeoff.cautions.find((x) => x.id === 'electrical-boxes')!;
+    expect(c.text).toMatch(/breaker/);
+    expect(c.text).toMatch(/licensed electrician/);
+  });
+
+  // Source: EPA RRP rule, 40 CFR 745 (TRADE.md §5) — pre-1978 or not sure → lead-safe caution.
+  it('adds lead-safe practices for homes built before 1978 or when not sure', () => {
+    expect(ids(oneWall(120, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }))).toContain('lead-safe');
+    expect(ids(oneWall(120, 'beadboard', 'wainscot', { builtBefore1978: 'not-sure' }))).toContain('lead-safe');
+    expect(ids(oneWall(120, 'beadboard', 'wainscot', { builtBefore1978: 'no' }))).not.toContain('lead-safe');
+  });
+
+  // Source: TRADE.md §5 — removing 60 ft of 5.5 in painted baseboard disturbs 27.5 sq ft (> 6 sq ft) → RRP applies; 12 ft → 5.5 sq ft (minor repair).
+  it('charges lead-safe set-up when removed painted baseboard passes 6 sq ft in a room', () => {
+    const p = (len: number): ProjectInput => ({ ...oneWall(len, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }), rooms: [{ ...oneWall(len, 'beadboard', 'wainscot').rooms[0]!, replaceBaseboard: true, walls: [{ length: len }] }] });
+    const big = estimate(p(60 * 12), rateBook, { rateBookParsed: true });
+    expect(big.takeoff.rooms[0]!.disturbedPaintSqFt).toBeCloseTo((720 * 5.25) / 144, 9);
+    expect(big.price.lines.some((l) => l.label === 'Lead-safe set-up')).toBe(true);
+    const small = estimate(p(12 * 12), rateBook, { rateBookParsed: true });
+    expect(small.takeoff.rooms[0]!.disturbedPaintSqFt).toBeLessThanOrEqual(6);
+    expect(small.price.lines.some((l) => l.label === 'Lead-safe set-up')).toBe(false);
+  });
+
+  // Source: IRC R307.2 and MDF industry guidance (TRADE.md §10) — damp rooms: moisture-resistant materials, no wood in the wet zone.
+  it('warns about moisture in damp rooms and ladders for full height', () => {
+    const damp = oneWall(120, 'beadboard', 'wainscot');
+    damp.rooms[0]!.damp = true;
+    expect(ids(damp)).toEqual(expect.arrayContaining(['damp-room', 'wet-zone']));
+    expect(ids(oneWall(120, 'beadboard', 'full'))).toContain('ladder');
+    expect(ids(oneWall(120, 'beadboard', 'wainscot'))).not.toContain('ladder');
+  });
+
+  it('every caution defers to codes or licensed professionals', () => {
+    const p = oneWall(120, 'shiplap-vertical-ply', 'full', { builtBefore1978: 'yes' });
+    p.rooms[0]!.damp = true;
+    for (const c of estimate(p, rateBook, { rateBookParsed: true }).takeoff.cautions) {
+      expect(c.text).toMatch(/code|licensed|rules|certified/i);
+    }
+  });
+});
+
+describe('bad input is refused with the field named', () => {
+  it('refuses negative and absurd lengths', () => {
+    const p = oneWall(120, 'beadboard', 'wainscot') as any;
+    p.rooms[0].walls[0].length = -5;
+    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))).toEqual({ 'rooms.0.walls.0.length': 'Wall length must be at least 12 in.' });
+    p.rooms[0].walls[0].length = 1e9;
+    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))['rooms.0.walls.0.length']).toMatch(/at most 1200 in/);
+    p.rooms[0].walls[0].length = Number.NaN;
+    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))['rooms.0.walls.0.length']).toMatch(/Wall length/);
+  });
+
+  it('refuses an opening bigger than its wall or taller than the ceiling', () => {
+    const p = oneWall(120, 'beadboard', 'wainscot') as any;
+    p.rooms[0].walls[0].openings[0] = { kind: 'door', width: 130, height: 100, sillHeight: 0 };
+    const f = fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }));
+    expect(f['rooms.0.walls.0.openings.0.width']).toMatch(/more than the wall is long/);
+    expect(f['rooms.0.walls.0.openings.0.height']).toMatch(/above the ceiling/);
+  });
+
+  it('refuses an unknown or switched-off treatment', () => {
+    expect(fieldsOf(() => estimate(oneWall(120, 'marble-slab', 'wainscot'), rateBook, { rateBookParsed: true }))['rooms.0.treatment.id']).toMatch(/Unknown treatment "marble-slab"/);
+    const rb = sampleRateBook();
+    rb.catalogue.treatments[3]!.enabled = false;
+    expect(fieldsOf(() => estimate(oneWall(120, 'beadboard', 'wainscot'), rb))['rooms.0.treatment.id']).toMatch(/does not offer/);
+  });
+
+  it('refuses unknown keys, unknown trip zones and a broken rate book', () => {
+    const p = { ...oneWall(120, 'beadboard', 'wainscot'), colour: 'red' };
+    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))).toHaveProperty('colour');
+    expect(fieldsOf(() => estimate({ ...oneWall(120, 'beadboard', 'wainscot'), tripZone: 'mars' }, rateBook, { rateBookParsed: true }))).toHaveProperty('tripZone');
+    const rb = sampleRateBook() as any;
+    rb.catalogue.capRailId = 'nothing';
+    rb.labour.rateCents = -1;
+    const f = fieldsOf(() => estimate(oneWall(120, 'beadboard', 'wainscot'), rb));
+    expect(f['rateBook.catalogue.capRailId']).toMatch(/No moulding/);
+    expect(f['rateBook.labour.rateCents']).toMatch(/cannot be negative/);
+  });
+
+  it('the project schema is strict and fills defaults', () => {
+    const parsed = projectSchema.parse(oneWall(120, 'beadboard', 'wainscot'));
+    expect(parsed.paint).toBe(false);
+    expect(parsed.rooms[0]!.walls[0]!.switches).toBe(0);
+  });
+});
+
+describe('properties of the price', () => {
+  const treatments = ['shiplap-vertical-ply', 'shiplap-horizontal', 'board-and-batten', 'beadboard', 'flat-panel', 'picture-frame'] as const;
+  const arb = fc.record({
+    length: fc.integer({ min: 60, max: 480 }),
+    more: fc.integer({ min: 1, max: 240 }),
+    treatment: fc.constantFrom(...treatments),
+    height: fc.constantFrom('wainscot' as const, 'full' as const),
+    outlets: fc.integer({ min: 0, max: 4 }),
+    paint: fc.boolean(),
+    measuredBy: fc.constantFrom('homeowner-estimate' as const, 'homeowner-tape' as const, 'site-measure' as const),
+    photos: fc.integer({ min: 0, max: 3 }),
+  });
+
+  // Property (common practice, no source): more wall never costs less.
+  fcTest.prop([arb], { numRuns: 150 })('more wall never costs less', (c) => {
+    const extra = { paint: c.paint, measuredBy: c.measuredBy, photoCount: c.photos };
+    const a = estimate(oneWall(c.length, c.treatment, c.height, extra, c.outlets), rateBook, { rateBookParsed: true }).price;
+    const b = estimate(oneWall(c.length + c.more, c.treatment, c.height, extra, c.outlets), rateBook, { rateBookParsed: true }).price;
+    expect(b.totalCents).toBeGreaterThanOrEqual(a.totalCents);
+    expect(b.lowCents).toBeGreaterThanOrEqual(a.lowCents);
+    expect(b.highCents).toBeGreaterThanOrEqual(a.highCents);
+  });
+
+  fcTest.prop([arb, fc.integer({ min: 0, max: 2_000_000 }), fc.integer({ min: 1, max: 50_000 })], { numRuns: 100 })(
+    'low ≤ high, and the minimum job holds',
+    (c, minimum, rounding) => {
+      const rb = { ...rateBook, minimumJobCents: minimum, roundingCents: rounding };
+      const p = estimate(oneWall(c.length, c.treatment, c.height, { paint: c.paint, measuredBy: c.measuredBy, photoCount: c.photos }, c.outlets), rb, { rateBookParsed: true }).price;
+      expect(p.lowCents).toBeLessThanOrEqual(p.highCents);
+      expect(p.lowCents).toBeGreaterThanOrEqual(minimum);
+      expect(p.totalCents).toBeGreaterThanOrEqual(minimum);
+      expect(p.highCents).toBeGreaterThanOrEqual(p.totalCents);
+    },
+  );
+});

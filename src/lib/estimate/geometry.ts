@@ -1,0 +1,129 @@
+/** Wall geometry: intervals, and where openings and electrical boxes sit on a wall. */
+import type { Opening, Wall } from './schemas.ts';
+import type { PlacedBox, PlacedOpening } from './types.ts';
+
+export type Interval = readonly [number, number];
+
+// Defaults for openings a homeowner only counts.
+// Source: TRADE.md §7 worked example — a 3'0" × 6'8" door (20 sq ft) and a 3 × 5 ft window (15 sq ft); common practice, no source.
+export const DEFAULT_DOOR = { width: 36, height: 80, sillHeight: 0 } as const;
+// Window sill at 36 in: common practice, no source.
+export const DEFAULT_WINDOW = { width: 36, height: 60, sillHeight: 36 } as const;
+
+// Electrical box cut-out, a single-gang device box: about 2-1/4 × 3-3/4 in (from memory).
+export const BOX_CUTOUT = { width: 2.25, height: 3.75 } as const;
+// Source: TRADE.md §4 — receptacles commonly 12–16 in to the bottom of the box; switches commonly
+// 48 in above the finished floor (common practice, not set by the NEC). Used only where a box's
+// height was not given.
+export const OUTLET_BOTTOM = 12;
+export const SWITCH_CENTRE = 48;
+
+const EPS = 1e-9;
+
+/** The parts of `base` not covered by any of `cuts`, dropping slivers shorter than `minLength`. */
+export function subtractIntervals(base: Interval, cuts: Interval[], minLength = 0.01): Interval[] {
+  let parts: Interval[] = [base];
+  for (const [c0, c1] of cuts) {
+    const next: Interval[] = [];
+    for (const [a, b] of parts) {
+      if (c1 <= a + EPS || c0 >= b - EPS) {
+        next.push([a, b]);
+        continue;
+      }
+      if (c0 > a) next.push([a, c0]);
+      if (c1 < b) next.push([c1, b]);
+    }
+    parts = next;
+  }
+  return parts.filter(([a, b]) => b - a >= minLength);
+}
+
+/** Length of the overlap of two intervals (0 when they do not overlap). */
+export function overlap(a0: number, a1: number, b0: number, b1: number): number {
+  return Math.max(0, Math.min(a1, b1) - Math.max(a0, b0));
+}
+
+function openingSize(o: Opening): { width: number; height: number; sillHeight: number; assumed: boolean } {
+  const d = o.kind === 'door' ? DEFAULT_DOOR : DEFAULT_WINDOW;
+  return {
+    width: o.width ?? d.width,
+    height: o.height ?? d.height,
+    sillHeight: o.sillHeight ?? d.sillHeight,
+    assumed: o.width === undefined || o.height === undefined || o.sillHeight === undefined,
+  };
+}
+
+/**
+ * Expands counted openings and gives each a place: measured offsets are kept; the rest are spread
+ * evenly over the wall between the placed ones. Validation has already checked that they fit.
+ */
+export function placeOpenings(openings: Opening[], wallLength: number): Array<Omit<PlacedOpening, 'inBand'>> {
+  const fixed: Array<Omit<PlacedOpening, 'inBand'>> = [];
+  const loose: Array<Omit<PlacedOpening, 'inBand' | 'offset'>> = [];
+  for (const o of openings) {
+    const size = openingSize(o);
+    for (let i = 0; i < o.count; i++) {
+      if (o.offset !== undefined && o.count === 1) fixed.push({ kind: o.kind, offset: o.offset, ...size });
+      else loose.push({ kind: o.kind, ...size, assumed: true });
+    }
+  }
+  if (loose.length === 0) return fixed.sort((a, b) => a.offset - b.offset);
+  // Spread the loose ones evenly through the free stretches, in proportion to their length.
+  const free = subtractIntervals([0, wallLength], fixed.map((f) => [f.offset, f.offset + f.width] as const));
+  const freeTotal = free.reduce((s, [a, b]) => s + (b - a), 0);
+  const looseWidth = loose.reduce((s, o) => s + o.width, 0);
+  const space = Math.max(0, freeTotal - looseWidth) / (loose.length + 1);
+  const placed = [...fixed];
+  // Walk the free stretches as if laid end to end: space, opening, space, opening, …, space.
+  let cursor = space;
+  for (const o of loose) {
+    let at = cursor;
+    let offset = free.length > 0 ? free[free.length - 1]![1] - o.width : 0;
+    for (const [a, b] of free) {
+      if (at + o.width <= b - a + EPS) {
+        offset = a + at;
+        break;
+      }
+      at -= b - a;
+      if (at < 0) at = 0;
+    }
+    placed.push({ ...o, offset: Math.max(0, Math.min(offset, wallLength - o.width)) });
+    cursor += o.width + space;
+  }
+  return placed.sort((a, b) => a.offset - b.offset);
+}
+
+/**
+ * Gives each outlet and switch a place on the wall, spread evenly through the stretches no door or
+ * window occupies at box height. `covered` and `capRailCrosses` are filled in by the takeoff.
+ */
+export function placeBoxes(wall: Wall, wallLength: number, openings: Array<Pick<PlacedOpening, 'offset' | 'width' | 'sillHeight' | 'height'>>): PlacedBox[] {
+  const boxes: PlacedBox[] = [];
+  const place = (kind: 'outlet' | 'switch', n: number, bottom: number): void => {
+    if (n === 0) return;
+    const top = bottom + BOX_CUTOUT.height;
+    const blocked = openings
+      .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0)
+      .map((o) => [o.offset - 2, o.offset + o.width + 2] as const);
+    let free = subtractIntervals([0, wallLength], blocked, BOX_CUTOUT.width);
+    if (free.length === 0) free = [[0, wallLength]];
+    const total = free.reduce((s, [a, b]) => s + (b - a - BOX_CUTOUT.width), 0);
+    for (let i = 0; i < n; i++) {
+      // Switches sit a little off the outlets' positions so the drawing keeps them apart.
+      let at = (total * (i + (kind === 'outlet' ? 0.5 : 0.3))) / n;
+      let offset = free[0]![0];
+      for (const [a, b] of free) {
+        const usable = b - a - BOX_CUTOUT.width;
+        if (at <= usable + EPS) {
+          offset = a + Math.max(0, at);
+          break;
+        }
+        at -= usable;
+      }
+      boxes.push({ kind, offset, bottom, width: BOX_CUTOUT.width, height: BOX_CUTOUT.height, covered: false, capRailCrosses: false });
+    }
+  };
+  place('outlet', wall.outlets, OUTLET_BOTTOM);
+  place('switch', wall.switches, SWITCH_CENTRE - BOX_CUTOUT.height / 2);
+  return boxes;
+}

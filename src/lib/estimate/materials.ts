@@ -1,0 +1,186 @@
+/** The materials list: stock pieces from the cut lists, consumables by coverage. */
+import { beadFeetPerTube, filletFeetPerTube, gallonsFor } from './coverage.ts';
+import type { Catalogue } from './schemas.ts';
+import { piecesPerSheet } from './sheet-layout.ts';
+import { stockPiecesNeeded } from './stock-cutting.ts';
+import type { MaterialLine, RoomTakeoff } from './types.ts';
+import { formatArea, formatLength, type Units } from './units.ts';
+
+/** Everything the walls need cut, gathered across the project so offcuts are shared between rooms. */
+export interface CutRegistry {
+  /** Rectangles per sheet id. */
+  sheets: Map<string, Array<{ width: number; height: number }>>;
+  /** Cut lengths per board or moulding id. */
+  lengths: Map<string, number[]>;
+}
+
+const EPS = 1e-9;
+const round2 = (x: number): number => Math.round(x * 100) / 100;
+const withWaste = (needed: number, waste: number): number => Math.ceil(needed * (1 + waste) - EPS);
+const pct = (f: number): string => `${round2(f * 100)} %`;
+const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
+
+/** Sheets for a set of pieces: each size at its own best layout, the fractions added up. */
+export function sheetsForPieces(sheet: { width: number; height: number }, pieces: Array<{ width: number; height: number }>, kerf: number) {
+  const groups = new Map<string, { width: number; height: number; count: number }>();
+  for (const p of pieces) {
+    // Sizes within 1/16 in share a layout; the larger is kept.
+    const key = `${Math.ceil(p.width * 16 - 1e-6)}x${Math.ceil(p.height * 16 - 1e-6)}`;
+    const g = groups.get(key);
+    if (g) {
+      g.count += 1;
+      g.width = Math.max(g.width, p.width);
+      g.height = Math.max(g.height, p.height);
+    } else groups.set(key, { width: p.width, height: p.height, count: 1 });
+  }
+  const sized = [...groups.values()]
+    .map((g) => ({ ...g, perSheet: piecesPerSheet(sheet, { width: g.width, height: g.height }, { kerf }) }))
+    .sort((a, b) => b.count - a.count);
+  const sheets = sized.reduce((s, g) => s + (g.perSheet > 0 ? g.count / g.perSheet : g.count), 0);
+  return { sheets, groups: sized };
+}
+
+export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: Catalogue, paint: boolean, units: Units): MaterialLine[] {
+  const lines: MaterialLine[] = [];
+  const waste = catalogue.wasteFactor;
+  const len = (x: number): string => formatLength(x, units);
+  const wasteText = waste > 0 ? `, plus ${pct(waste)} waste` : '';
+
+  for (const sheet of catalogue.sheets) {
+    const pieces = reg.sheets.get(sheet.id);
+    if (!pieces || pieces.length === 0) continue;
+    const { sheets, groups } = sheetsForPieces(sheet, pieces, catalogue.kerf);
+    const shown = groups.slice(0, 3).map((g) => `${g.count} × ${len(g.width)} × ${len(g.height)} at ${g.perSheet} per sheet`);
+    const more = groups.length > 3 ? ` and ${plural(groups.length - 3, 'other size')}` : '';
+    lines.push({
+      id: `sheet:${sheet.id}`,
+      label: sheet.name,
+      quantity: withWaste(sheets, waste),
+      unit: 'sheet',
+      needed: round2(sheets),
+      unitCents: sheet.priceCents,
+      piecesPerSheet: groups[0]!.perSheet,
+      basis: `${shown.join('; ')}${more} (saw kerf ${len(catalogue.kerf)}) = ${round2(sheets)} sheets${wasteText}`,
+    });
+  }
+
+  const stockLines = (items: Array<{ id: string; name: string; length: number; priceCents: number }>, prefix: string): void => {
+    for (const stock of items) {
+      const cuts = reg.lengths.get(stock.id);
+      if (!cuts || cuts.length === 0) continue;
+      const needed = stockPiecesNeeded(cuts, stock.length, catalogue.kerf);
+      const total = cuts.reduce((s, c) => s + c, 0);
+      lines.push({
+        id: `${prefix}:${stock.id}`,
+        label: stock.name,
+        quantity: withWaste(needed, waste),
+        unit: 'piece',
+        needed,
+        unitCents: stock.priceCents,
+        cuts: cuts.length,
+        stockLength: stock.length,
+        basis: `${plural(cuts.length, 'cut')} totalling ${len(total)} from ${len(stock.length)} lengths (saw kerf ${len(catalogue.kerf)}) = ${plural(needed, 'length')}${wasteText}`,
+      });
+    }
+  };
+  stockLines(catalogue.boards, 'board');
+  stockLines(catalogue.mouldings, 'moulding');
+
+  const s = catalogue.supplies;
+  const sum = (f: (r: RoomTakeoff) => number): number => rooms.reduce((acc, r) => acc + f(r), 0);
+  const panelSqFt = sum((r) => r.panelSqFt);
+  const trimFeet = sum((r) => r.trimFeet);
+  const netSqFt = sum((r) => r.netSqFt);
+
+  const brads = panelSqFt * s.brads.perSqFt + trimFeet * s.brads.perFootOfTrim;
+  if (brads > 0) {
+    lines.push({
+      id: 'brads',
+      label: s.brads.name,
+      quantity: Math.ceil(brads / s.brads.perBox - EPS),
+      unit: 'box',
+      needed: round2(brads / s.brads.perBox),
+      unitCents: s.brads.priceCents,
+      basis: `${formatArea(panelSqFt, units)} × ${s.brads.perSqFt} per sq ft + ${round2(trimFeet)} ft of trim × ${s.brads.perFootOfTrim} per ft = ${Math.ceil(brads)} brads, ${s.brads.perBox} per box`,
+    });
+  }
+  if (panelSqFt > 0 && s.adhesive.feetPerSqFt > 0) {
+    const feet = panelSqFt * s.adhesive.feetPerSqFt;
+    const perTube = beadFeetPerTube(s.adhesive.fluidOunces, s.adhesive.bead);
+    lines.push({
+      id: 'adhesive',
+      label: s.adhesive.name,
+      quantity: Math.ceil(feet / perTube - EPS),
+      unit: 'tube',
+      needed: round2(feet / perTube),
+      unitCents: s.adhesive.priceCents,
+      basis: `${formatArea(panelSqFt, units)} × ${s.adhesive.feetPerSqFt} ft of bead per sq ft = ${round2(feet)} ft; a ${s.adhesive.fluidOunces} fl oz tube lays ${round2(perTube)} ft of ${len(s.adhesive.bead)} round bead`,
+    });
+  }
+  const caulkFeet = sum((r) => r.caulkFeet);
+  if (caulkFeet > 0) {
+    const perTube = filletFeetPerTube(s.caulk.fluidOunces, s.caulk.bead);
+    lines.push({
+      id: 'caulk',
+      label: s.caulk.name,
+      quantity: Math.ceil(caulkFeet / perTube - EPS),
+      unit: 'tube',
+      needed: round2(caulkFeet / perTube),
+      unitCents: s.caulk.priceCents,
+      basis: `${round2(caulkFeet)} ft of joints; a ${s.caulk.fluidOunces} fl oz tube runs ${round2(perTube)} ft of ${len(s.caulk.bead)} fillet`,
+    });
+  }
+  if (netSqFt > 0) {
+    lines.push({
+      id: 'filler',
+      label: s.filler.name,
+      quantity: Math.ceil(netSqFt / s.filler.sqFtPerUnit - EPS),
+      unit: 'each',
+      needed: round2(netSqFt / s.filler.sqFtPerUnit),
+      unitCents: s.filler.priceCents,
+      basis: `${formatArea(netSqFt, units)} ÷ ${s.filler.sqFtPerUnit} sq ft each`,
+    });
+  }
+  if (paint) {
+    const primed = rooms.filter((r) => catalogue.treatments.find((t) => t.id === r.treatmentId)?.needsPrimer);
+    const primeSqFt = primed.reduce((acc, r) => acc + r.paintSqFt, 0);
+    if (primeSqFt > 0 && s.primer.coats > 0) {
+      const g = gallonsFor(primeSqFt, s.primer.coats, s.primer.sqFtPerGallon);
+      lines.push({
+        id: 'primer',
+        label: s.primer.name,
+        quantity: Math.ceil(g - EPS),
+        unit: 'gallon',
+        needed: round2(g),
+        unitCents: s.primer.priceCents,
+        basis: `${formatArea(primeSqFt, units)} × ${plural(s.primer.coats, 'coat')} ÷ ${s.primer.sqFtPerGallon} sq ft per gallon`,
+      });
+    }
+    const paintSqFt = sum((r) => r.paintSqFt);
+    if (paintSqFt > 0 && s.paint.coats > 0) {
+      const g = gallonsFor(paintSqFt, s.paint.coats, s.paint.sqFtPerGallon);
+      lines.push({
+        id: 'paint',
+        label: s.paint.name,
+        quantity: Math.ceil(g - EPS),
+        unit: 'gallon',
+        needed: round2(g),
+        unitCents: s.paint.priceCents,
+        basis: `${formatArea(paintSqFt, units)} × ${plural(s.paint.coats, 'coat')} ÷ ${s.paint.sqFtPerGallon} sq ft per gallon`,
+      });
+    }
+  }
+  const extenders = sum((r) => r.cutOuts);
+  if (extenders > 0) {
+    lines.push({
+      id: 'box-extenders',
+      label: s.boxExtender.name,
+      quantity: extenders,
+      unit: 'each',
+      needed: extenders,
+      unitCents: s.boxExtender.priceCents,
+      basis: `one for each of ${plural(extenders, 'outlet or switch box', 'outlet and switch boxes')} inside the new wall finish`,
+    });
+  }
+  return lines;
+}

@@ -1,0 +1,96 @@
+import { fc, test as fcTest } from '@fast-check/vitest';
+import { describe, expect, it } from 'vitest';
+import { planStockCuts, stockPiecesNeeded } from './stock-cutting.ts';
+
+const repeat = (lengths: number[], counts: number[]): number[] => lengths.flatMap((l, i) => Array<number>(counts[i]!).fill(l));
+
+/** Brute force: try every assignment of cuts to stock pieces (small cases only). */
+function bruteForce(cuts: number[], stock: number, kerf: number): number {
+  const n = cuts.length;
+  if (n === 0) return 0;
+  let best = n;
+  const loads: Array<{ sum: number; count: number }> = [];
+  const fitsWith = (b: { sum: number; count: number }, c: number): boolean => b.sum + c + b.count * kerf <= stock + 1e-9;
+  const go = (i: number): void => {
+    if (loads.length >= best) return;
+    if (i === n) {
+      best = loads.length;
+      return;
+    }
+    for (const b of loads) {
+      if (fitsWith(b, cuts[i]!)) {
+        b.sum += cuts[i]!;
+        b.count += 1;
+        go(i + 1);
+        b.sum -= cuts[i]!;
+        b.count -= 1;
+      }
+    }
+    loads.push({ sum: cuts[i]!, count: 1 });
+    go(i + 1);
+    loads.pop();
+  };
+  go(0);
+  return best;
+}
+
+describe('stockPiecesNeeded', () => {
+  it('handles the plain cases', () => {
+    expect(stockPiecesNeeded([], 96)).toBe(0);
+    expect(stockPiecesNeeded([96], 96)).toBe(1);
+    expect(stockPiecesNeeded([48, 48], 96)).toBe(1);
+    // Source: TRADE.md §9 — kerf is lost at each cut: two 48 in cuts no longer come from one 96 in length.
+    expect(stockPiecesNeeded([48, 48], 96, 0.125)).toBe(2);
+    expect(stockPiecesNeeded([47.9375, 47.9375], 96, 0.125)).toBe(1);
+  });
+
+  it('refuses a cut longer than the stock, naming the problem', () => {
+    expect(() => stockPiecesNeeded([100], 96)).toThrow(/longer than the 96 in stock/);
+    expect(() => stockPiecesNeeded([-1], 96)).toThrow(/positive/);
+  });
+
+  // Source: brute force over every assignment (computed here) — exact for up to 20 cuts.
+  fcTest.prop([fc.array(fc.integer({ min: 1, max: 96 }), { minLength: 1, maxLength: 9 }), fc.constantFrom(0, 0.125)], { numRuns: 150 })(
+    'matches brute force on small cases',
+    (cuts, kerf) => {
+      expect(stockPiecesNeeded(cuts, 96, kerf)).toBe(bruteForce(cuts, 96, kerf));
+    },
+  );
+
+  // Source: AMPL book example cut.dat — stock 110, widths 20/45/50/55/75, orders 48/35/24/10/8; integer optimum 47 (TRADE.md §12, computed there by exact ILP).
+  it('meets the optimum 47 on the AMPL cutting-stock example', () => {
+    expect(stockPiecesNeeded(repeat([20, 45, 50, 55, 75], [48, 35, 24, 10, 8]), 110)).toBe(47);
+  });
+
+  // Source: GAMS model library CUTSTOCK (Gilmore–Gomory) — raw width 100, widths 45/36/31/14, demand 97/610/395/211; integer optimum 453 (TRADE.md §12).
+  it('meets the optimum 453 on the GAMS cutstock example', () => {
+    expect(stockPiecesNeeded(repeat([45, 36, 31, 14], [97, 610, 395, 211]), 100)).toBe(453);
+  });
+
+  // Source: Wikipedia "Cutting stock problem" paper-roll example (data rows from memory; total-length bound 72.7 quoted
+  // in a public AMPL file; integer optimum 73 computed in TRADE.md §12). The heuristic must stay within FFD's proven
+  // bound 11/9·OPT + 6/9 (Dósa 2007) and can never beat the optimum.
+  it('stays between the optimum and the FFD bound on the paper-roll example', () => {
+    const cuts = repeat(
+      [1380, 1520, 1560, 1710, 1820, 1880, 1930, 2000, 2050, 2100, 2140, 2150, 2200],
+      [22, 25, 12, 14, 18, 18, 20, 10, 12, 14, 16, 18, 20],
+    );
+    const n = stockPiecesNeeded(cuts, 5600);
+    expect(n).toBeGreaterThanOrEqual(73);
+    expect(n).toBeLessThanOrEqual(Math.floor((11 / 9) * 73 + 6 / 9));
+    expect(n).toBeLessThanOrEqual(74);
+  });
+
+  fcTest.prop([fc.array(fc.double({ min: 1, max: 96, noNaN: true }), { minLength: 1, maxLength: 60 }), fc.constantFrom(0, 0.125)], { numRuns: 100 })(
+    'never below the total-length bound and the plan is feasible',
+    (cuts, kerf) => {
+      const n = stockPiecesNeeded(cuts, 96, kerf);
+      // Source: TRADE.md §12 — result ≥ ceil(total length / stock) (property).
+      expect(n).toBeGreaterThanOrEqual(Math.ceil(cuts.reduce((s, c) => s + c, 0) / 96 - 1e-9));
+      const plan = planStockCuts(cuts, 96, kerf);
+      expect(plan.flat().length).toBe(cuts.length);
+      for (const stock of plan) expect(stock.reduce((s, c) => s + c, 0) + (stock.length - 1) * kerf).toBeLessThanOrEqual(96 + 1e-6);
+      if (cuts.length <= 20) expect(plan.length).toBe(n);
+    },
+  );
+});

@@ -1,0 +1,486 @@
+/**
+ * The takeoff: per wall and per room, the covered band, areas, openings, boxes, board layout, the
+ * pieces of material on the wall and the cuts they need; then the project's materials and cautions.
+ */
+import { boardPositions, boardRun } from './board-run.ts';
+import { cautionsFor } from './cautions.ts';
+import { overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
+import { materialsFor, type CutRegistry } from './materials.ts';
+import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
+import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
+import { formatLength, type Units } from './units.ts';
+import { validateProject } from './validate.ts';
+
+const MIN_PIECE = 0.5; // pieces shorter than half an inch are not cut
+
+/** Whether the treatment puts boards or sheets over the whole band (so boxes inside it need cut-outs and extenders). */
+export function coversWall(t: Treatment): boolean {
+  switch (t.kind) {
+    case 'shiplap':
+    case 'beadboard':
+      return true;
+    case 'board-and-batten':
+    case 'flat-panel':
+      return t.backingSheetId !== undefined;
+    case 'picture-frame':
+      return false;
+  }
+}
+
+/** Top of the covered band: the wainscot height (one third of the ceiling when not given) or the ceiling. */
+export function bandTopFor(room: Room): number {
+  if (room.treatment.height === 'full') return room.ceilingHeight;
+  // Source: TRADE.md §8 — rule of thirds, cap at about one third of the wall height (This Old House).
+  return room.treatment.wainscotHeight ?? Math.round(room.ceilingHeight / 3);
+}
+
+export function wallLength(room: Room, wall: Wall): number {
+  if (wall.length !== undefined) return wall.length;
+  return wall.side === 'width' ? room.width! : room.length!;
+}
+
+/** Splits a run longer than `max` into full lengths and a remainder. */
+function splitFull(len: number, max: number): number[] {
+  const out: number[] = [];
+  let rest = len;
+  while (rest > max + 1e-9) {
+    out.push(max);
+    rest -= max;
+  }
+  if (rest >= MIN_PIECE) out.push(rest);
+  return out;
+}
+
+/** Splits a trim run into equal pieces that each fit the stock once both end allowances are added. */
+function trimCuts(len: number, stock: number, allowance: number): number[] {
+  const usable = Math.max(1, stock - 2 * allowance);
+  const n = Math.max(1, Math.ceil(len / usable - 1e-9));
+  return Array.from({ length: n }, () => Math.min(stock, len / n + 2 * allowance));
+}
+
+function addCuts(map: Map<string, number[]>, id: string, cuts: number[]): void {
+  const list = map.get(id);
+  if (list) list.push(...cuts);
+  else map.set(id, [...cuts]);
+}
+function addSheetPiece(reg: CutRegistry, id: string, width: number, height: number): void {
+  const list = reg.sheets.get(id);
+  const piece = { width, height };
+  if (list) list.push(piece);
+  else reg.sheets.set(id, [piece]);
+}
+
+interface WallContext {
+  length: number;
+  bandBottom: number;
+  bandTop: number;
+  openings: PlacedOpening[];
+  pieces: WallPiece[];
+  reg: CutRegistry;
+  catalogue: Catalogue;
+  trimFeet: number;
+  caulkFeet: number;
+}
+
+/** Vertical stretches of the band in the column [x0, x1] that no opening interrupts. */
+function columnIntervals(ctx: WallContext, x0: number, x1: number, bottom = ctx.bandBottom, top = ctx.bandTop): Interval[] {
+  const cuts = ctx.openings
+    .filter((o) => overlap(o.offset, o.offset + o.width, x0, x1) > 0.01)
+    .map((o) => [o.sillHeight, o.sillHeight + o.height] as const);
+  return subtractIntervals([bottom, top], cuts, MIN_PIECE);
+}
+
+/**
+ * A column [x0, x1] split at the edges of openings, each slice with its own vertical stretches: a board
+ * or panel that straddles a door edge is notched around it rather than left out.
+ */
+function columnSlices(ctx: WallContext, x0: number, x1: number, bottom = ctx.bandBottom, top = ctx.bandTop): Array<{ x0: number; x1: number; spans: Interval[] }> {
+  const edges = [x0, x1];
+  for (const o of ctx.openings) {
+    for (const e of [o.offset, o.offset + o.width]) if (e > x0 + 0.01 && e < x1 - 0.01) edges.push(e);
+  }
+  edges.sort((a, b) => a - b);
+  const out: Array<{ x0: number; x1: number; spans: Interval[] }> = [];
+  for (let i = 0; i + 1 < edges.length; i++) {
+    const a = edges[i]!;
+    const b = edges[i + 1]!;
+    if (b - a < 0.01) continue;
+    const spans = columnIntervals(ctx, a, b, bottom, top);
+    if (spans.length > 0) out.push({ x0: a, x1: b, spans });
+  }
+  return out;
+}
+
+/** The lengths to cut for one column: the union of its slices' stretches (a notched board is one board). */
+function columnCuts(slices: Array<{ spans: Interval[] }>): Interval[] {
+  const all = slices.flatMap((s) => s.spans).sort((a, b) => a[0] - b[0]);
+  const merged: Array<[number, number]> = [];
+  for (const [a, b] of all) {
+    const last = merged.at(-1);
+    if (last && a <= last[1] + 1e-6) last[1] = Math.max(last[1], b);
+    else merged.push([a, b]);
+  }
+  return merged;
+}
+
+/** Horizontal stretches of the wall in the row [y0, y1] that no opening interrupts. */
+function rowIntervals(ctx: WallContext, y0: number, y1: number, x0 = 0, x1 = ctx.length): Interval[] {
+  const cuts = ctx.openings
+    .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, y0, y1) > 0.01)
+    .map((o) => [o.offset, o.offset + o.width] as const);
+  return subtractIntervals([x0, x1], cuts, MIN_PIECE);
+}
+
+function sheetById(c: Catalogue, id: string): SheetStock {
+  return c.sheets.find((s) => s.id === id)!;
+}
+function boardById(c: Catalogue, id: string): BoardStock {
+  return c.boards.find((s) => s.id === id)!;
+}
+
+/** Panels or backing sheets laid side by side across the wall, full sheet width, butted. */
+function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel'): void {
+  const longSide = Math.max(sheet.width, sheet.height);
+  for (const col of boardPositions(ctx.length, sheet.width, 0)) {
+    const slices = columnSlices(ctx, col.start, col.start + col.width);
+    for (const sl of slices) {
+      for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.width < sheet.width - 1e-6 });
+    }
+    // A panel notched around an opening still comes from one piece of the sheet.
+    for (const [y0, y1] of columnCuts(slices)) {
+      for (const len of splitFull(y1 - y0, longSide)) addSheetPiece(ctx.reg, sheet.id, col.width, len);
+    }
+  }
+}
+
+function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>): BoardLayout {
+  const fromSheet = t.source.from === 'sheet';
+  const sheet = t.source.from === 'sheet' ? sheetById(ctx.catalogue, t.source.sheetId) : undefined;
+  const board = t.source.from === 'boards' ? boardById(ctx.catalogue, t.source.boardId) : undefined;
+  const faceWidth = t.source.from === 'sheet' ? t.source.stripWidth : board!.faceWidth;
+  const maxLen = sheet ? Math.max(sheet.width, sheet.height) : board!.length;
+  const role: WallPiece['role'] = fromSheet ? 'strip' : 'board';
+  const cut = (len: number): void => {
+    if (sheet) addSheetPiece(ctx.reg, sheet.id, faceWidth, len);
+    else addCuts(ctx.reg.lengths, board!.id, [len]);
+  };
+  const put = (x: number, y: number, w: number, h: number, len: number, ripped: boolean): void => {
+    ctx.pieces.push({ role, x, y, width: w, height: h, ripped });
+    cut(len);
+  };
+  if (t.orientation === 'vertical') {
+    const run = boardRun(ctx.length, faceWidth, t.gap);
+    boardPositions(ctx.length, faceWidth, t.gap).forEach((b, i) => {
+      const ripped = i === run.count - 1 && run.lastWidth < faceWidth - 1e-6;
+      const slices = columnSlices(ctx, b.start, b.start + b.width);
+      for (const sl of slices) for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped });
+      for (const [y0, y1] of columnCuts(slices)) for (const len of splitFull(y1 - y0, maxLen)) cut(len);
+    });
+    return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...run };
+  }
+  const height = ctx.bandTop - ctx.bandBottom;
+  const run = boardRun(height, faceWidth, t.gap);
+  boardPositions(height, faceWidth, t.gap).forEach((b, i) => {
+    const ripped = i === run.count - 1 && run.lastWidth < faceWidth - 1e-6;
+    const y = ctx.bandBottom + b.start;
+    for (const [x0, x1] of rowIntervals(ctx, y, y + b.width)) {
+      let x = x0;
+      for (const len of splitFull(x1 - x0, maxLen)) {
+        put(x, y, len, b.width, len, ripped);
+        x += len;
+      }
+    }
+  });
+  return { orientation: 'horizontal', boardWidth: faceWidth, gap: t.gap, ...run };
+}
+
+/** Vertical members (battens or stiles) spread evenly, one at each wall end, no more than `spacing` apart on centre. */
+function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
+  const w = board.width;
+  if (top - bottom < MIN_PIECE) return;
+  const n = ctx.length <= 2 * w ? 1 : Math.ceil((ctx.length - w) / spacing - 1e-9) + 1;
+  const pitch = n > 1 ? (ctx.length - w) / (n - 1) : 0;
+  for (let i = 0; i < n; i++) {
+    const x = i * pitch;
+    for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
+      let y = y0;
+      for (const len of splitFull(y1 - y0, board.length)) {
+        ctx.pieces.push({ role, x, y, width: w, height: len });
+        addCuts(ctx.reg.lengths, board.id, [len]);
+        ctx.trimFeet += len / 12;
+        ctx.caulkFeet += (2 * len) / 12;
+        y += len;
+      }
+    }
+  }
+}
+
+/** A horizontal rail across the wall at [y, y + board width], broken by openings. */
+function layRail(ctx: WallContext, board: BoardStock, y: number): void {
+  for (const [x0, x1] of rowIntervals(ctx, y, y + board.width)) {
+    let x = x0;
+    for (const len of splitFull(x1 - x0, board.length)) {
+      ctx.pieces.push({ role: 'rail', x, y, width: len, height: board.width });
+      addCuts(ctx.reg.lengths, board.id, [len]);
+      ctx.trimFeet += len / 12;
+      ctx.caulkFeet += (2 * len) / 12;
+      x += len;
+    }
+  }
+}
+
+function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-frame' }>, rows: number): WallTakeoff['frames'] {
+  const moulding = ctx.catalogue.mouldings.find((m) => m.id === t.mouldingId)!;
+  const m = t.margin;
+  const bottom = ctx.bandBottom + m;
+  const top = ctx.bandTop - m;
+  const hb = top - bottom;
+  const fh = (hb - (rows - 1) * t.frameGap) / rows;
+  // A frame narrower or shorter than about three moulding widths has no opening left to read as a frame.
+  const minSide = Math.max(6, 3 * moulding.width);
+  if (fh < minSide) return { count: 0, width: 0, height: 0 };
+  const blocked = ctx.openings
+    .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0)
+    .map((o) => [o.offset - m, o.offset + o.width + m] as const);
+  let count = 0;
+  let widthSum = 0;
+  for (const [a, b] of subtractIntervals([m, ctx.length - m], blocked, minSide)) {
+    const s = b - a;
+    const n = Math.max(1, Math.round((s + t.frameGap) / (t.targetFrameWidth + t.frameGap)));
+    const fw = (s - (n - 1) * t.frameGap) / n;
+    for (let i = 0; i < n; i++) {
+      for (let r = 0; r < rows; r++) {
+        const x = a + i * (fw + t.frameGap);
+        const y = bottom + r * (fh + t.frameGap);
+        ctx.pieces.push({ role: 'frame', x, y, width: fw, height: fh });
+        // Source: TRADE.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
+        addCuts(ctx.reg.lengths, moulding.id, [fw, fw, fh, fh]);
+        ctx.trimFeet += (2 * (fw + fh)) / 12;
+        ctx.caulkFeet += (4 * (fw + fh)) / 12; // outer and inner edges
+        count += 1;
+        widthSum += fw;
+      }
+    }
+  }
+  return { count, width: count ? widthSum / count : 0, height: count ? fh : 0 };
+}
+
+function wallTakeoff(
+  room: Room,
+  wall: Wall,
+  index: number,
+  t: Treatment,
+  catalogue: Catalogue,
+  reg: CutRegistry,
+  units: Units,
+): { wall: WallTakeoff; trimFeet: number; caulkFeet: number } {
+  const length = wallLength(room, wall);
+  const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
+  const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
+  const bandBottom = baseboard.width;
+  const bandTop = bandTopFor(room);
+  const wainscot = room.treatment.height === 'wainscot';
+  const openings: PlacedOpening[] = placeOpenings(wall.openings, length).map((o) => ({
+    ...o,
+    inBand: overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop) > 0,
+  }));
+  const covers = coversWall(t);
+  const boxes = placeBoxes(wall, length, openings).map((b) => ({
+    ...b,
+    covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, bandTop) > 0,
+    capRailCrosses: wainscot && overlap(b.bottom, b.bottom + b.height, bandTop, bandTop + capRail.width) > 0,
+  }));
+  const coveredHeight = bandTop - bandBottom;
+  const grossSqIn = length * coveredHeight;
+  const openingsSqIn = openings.reduce(
+    (s, o) => s + overlap(o.offset, o.offset + o.width, 0, length) * overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop),
+    0,
+  );
+  const ctx: WallContext = { length, bandBottom, bandTop, openings, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0 };
+  const notes: string[] = [];
+  const label = wall.label ?? `Wall ${index + 1}`;
+  let boards: BoardLayout | undefined;
+  let frames: WallTakeoff['frames'];
+
+  switch (t.kind) {
+    case 'shiplap':
+      boards = layShiplap(ctx, t);
+      break;
+    case 'beadboard':
+      layPanels(ctx, sheetById(catalogue, t.sheetId), 'panel');
+      break;
+    case 'board-and-batten': {
+      if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel');
+      const rail = t.topRailId ? boardById(catalogue, t.topRailId) : undefined;
+      const top = rail ? bandTop - rail.width : bandTop;
+      layUprights(ctx, boardById(catalogue, t.battenId), t.battenSpacing, bandBottom, top, 'batten');
+      if (rail) layRail(ctx, rail, top);
+      break;
+    }
+    case 'flat-panel': {
+      if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel');
+      const rail = boardById(catalogue, t.railId);
+      layRail(ctx, rail, bandBottom);
+      layRail(ctx, rail, bandTop - rail.width);
+      layUprights(ctx, boardById(catalogue, t.stileId), t.stileSpacing, bandBottom + rail.width, bandTop - rail.width, 'stile');
+      break;
+    }
+    case 'picture-frame':
+      frames = layFrames(ctx, t, wainscot ? 1 : t.fullHeightRows);
+      break;
+  }
+
+  // Cap rail along the top of a wainscot, broken where an opening crosses it.
+  let capRailFeet = 0;
+  if (wainscot) {
+    for (const [x0, x1] of rowIntervals(ctx, bandTop, bandTop + capRail.width)) {
+      ctx.pieces.push({ role: 'cap-rail', x: x0, y: bandTop, width: x1 - x0, height: capRail.width });
+      addCuts(reg.lengths, capRail.id, trimCuts(x1 - x0, capRail.length, catalogue.trimEndAllowance));
+      capRailFeet += (x1 - x0) / 12;
+    }
+    ctx.caulkFeet += 2 * capRailFeet;
+  } else {
+    ctx.caulkFeet += length / 12; // along the ceiling
+  }
+  // Baseboard along the floor, broken by doors; new stock only when it is replaced.
+  let baseboardFeet = 0;
+  for (const [x0, x1] of rowIntervals(ctx, 0, baseboard.width)) {
+    ctx.pieces.push({ role: 'baseboard', x: x0, y: 0, width: x1 - x0, height: baseboard.width });
+    if (room.replaceBaseboard) addCuts(reg.lengths, baseboard.id, trimCuts(x1 - x0, baseboard.length, catalogue.trimEndAllowance));
+    baseboardFeet += (x1 - x0) / 12;
+  }
+  if (room.replaceBaseboard) ctx.caulkFeet += baseboardFeet;
+  // Wall ends and the edges of openings inside the band.
+  ctx.caulkFeet += (2 * coveredHeight) / 12;
+  for (const o of openings) {
+    if (!o.inBand) continue;
+    const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop);
+    const across = (o.sillHeight > bandBottom ? o.width : 0) + (o.sillHeight + o.height < bandTop ? o.width : 0);
+    ctx.caulkFeet += (2 * v + across) / 12;
+  }
+
+  if (boards && boards.lastWidth < 1 && boards.count > 1) {
+    notes.push(`The last board on ${label} is ripped to ${formatLength(boards.lastWidth, units)}; splitting the difference between the first and last boards looks better (common practice).`);
+  }
+  if (boards && boards.leftover > 0) {
+    notes.push(`${label} ends ${formatLength(boards.leftover, units)} short of a full gap; the corner trim hides it.`);
+  }
+  if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
+  const covered = boxes.filter((b) => b.covered).length;
+  const out: WallTakeoff = {
+    label,
+    length,
+    ceilingHeight: room.ceilingHeight,
+    bandBottom,
+    bandTop,
+    coveredHeight,
+    grossSqFt: grossSqIn / 144,
+    openingsSqFt: openingsSqIn / 144,
+    netSqFt: (grossSqIn - openingsSqIn) / 144,
+    openings,
+    boxes,
+    cutOuts: covered,
+    returns: openings.filter((o) => o.inBand).length,
+    ...(boards ? { boards } : {}),
+    ...(frames ? { frames } : {}),
+    pieces: ctx.pieces,
+    capRailFeet,
+    baseboardFeet,
+    notes,
+  };
+  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet };
+}
+
+function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
+  const t = catalogue.treatments.find((x) => x.id === room.treatment.id)!;
+  const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
+  const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
+  let trimFeet = 0;
+  let caulkFeet = 0;
+  const walls = room.walls.map((w, i) => {
+    const wt = wallTakeoff(room, w, i, t, catalogue, reg, units);
+    trimFeet += wt.trimFeet;
+    caulkFeet += wt.caulkFeet;
+    return wt.wall;
+  });
+  const sum = (f: (w: WallTakeoff) => number): number => walls.reduce((s, w) => s + f(w), 0);
+  const netSqFt = sum((w) => w.netSqFt);
+  const capRailFeet = sum((w) => w.capRailFeet);
+  const baseboardFeet = sum((w) => w.baseboardFeet);
+  const baseboardRemovedFeet = room.replaceBaseboard ? baseboardFeet : 0;
+  trimFeet += capRailFeet + (room.replaceBaseboard ? baseboardFeet : 0);
+  const n = walls.length;
+  const panelSqFt = coversWall(t) ? netSqFt : 0;
+  const paintSqFt = paint ? netSqFt + (capRailFeet * capRail.width + (room.replaceBaseboard ? baseboardFeet * baseboard.width : 0)) / 12 : 0;
+  return {
+    name: room.name,
+    treatmentId: t.id,
+    treatmentName: t.name,
+    treatmentKind: t.kind,
+    height: room.treatment.height,
+    ceilingHeight: room.ceilingHeight,
+    bandTop: bandTopFor(room),
+    walls,
+    grossSqFt: sum((w) => w.grossSqFt),
+    netSqFt,
+    paintSqFt,
+    cutOuts: sum((w) => w.cutOuts),
+    returns: sum((w) => w.returns),
+    // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
+    insideCorners: room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1)),
+    outsideCorners: room.outsideCorners ?? 0,
+    capRailFeet,
+    baseboardFeet,
+    baseboardRemovedFeet,
+    // Source: TRADE.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
+    // The old baseboard is taken to be as tall as the new one.
+    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,
+    panelSqFt,
+    trimFeet,
+    caulkFeet,
+    damp: room.damp,
+  };
+}
+
+/** Takeoff of an already validated project. */
+export function takeoffOf(project: Project, catalogue: Catalogue, units: Units): Takeoff {
+  const reg: CutRegistry = { sheets: new Map(), lengths: new Map() };
+  const rooms = project.rooms.map((r) => roomTakeoff(r, catalogue, reg, project.paint, units));
+  const sum = (f: (r: RoomTakeoff) => number): number => rooms.reduce((s, r) => s + f(r), 0);
+  const notes: string[] = [];
+  if (project.rooms.some((r) => r.treatment.height === 'wainscot' && r.treatment.wainscotHeight === undefined)) {
+    notes.push('Where no wainscot height was given, it is one third of the ceiling height, a common design rule.');
+  }
+  if (rooms.some((r) => r.walls.some((w) => w.openings.some((o) => o.assumed)))) {
+    notes.push(
+      `Doors and windows without measurements are drawn at common sizes: doors ${formatLength(36, units)} × ${formatLength(80, units)}, windows ${formatLength(36, units)} × ${formatLength(60, units)} with the sill at ${formatLength(36, units)}, spread evenly along the wall.`,
+    );
+  }
+  for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));
+  return {
+    units,
+    rooms,
+    grossSqFt: sum((r) => r.grossSqFt),
+    netSqFt: sum((r) => r.netSqFt),
+    paintSqFt: sum((r) => r.paintSqFt),
+    cutOuts: sum((r) => r.cutOuts),
+    materials: materialsFor(rooms, reg, catalogue, project.paint, units),
+    cautions: cautionsFor(project, rooms, catalogue),
+    facts: {
+      paint: project.paint,
+      builtBefore1978: project.builtBefore1978,
+      measuredBy: project.measuredBy,
+      photoCount: project.photoCount,
+      ...(project.tripZone ? { tripZone: project.tripZone } : {}),
+    },
+    notes,
+  };
+}
+
+/**
+ * The takeoff of a project against a catalogue: validates the project (throws EstimateInputError
+ * with field paths), then works out every wall and room and the materials list.
+ */
+export function takeoff(project: unknown, catalogue: Catalogue, units: Units = 'imperial'): Takeoff {
+  return takeoffOf(validateProject(project, catalogue), catalogue, units);
+}
