@@ -3,6 +3,9 @@ import { RequestContext } from '@mikro-orm/core';
 import { getOrm } from './lib/server/db/orm';
 import { startMailWorker } from './lib/server/mail/worker';
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { csrf } from './lib/server/auth/csrf';
+import { session } from './lib/server/auth/session-middleware';
+import { staffArea } from './lib/server/auth/staff-area';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
@@ -37,4 +40,5 @@ const securityHeaders = defineMiddleware(async (context, next) => {
   return response;
 });
 
-export const onRequest = sequence(requestContext, securityHeaders);
+// Order matters: refuse cross-site writes before any work, then find the session, then guard /app.
+export const onRequest = sequence(requestContext, securityHeaders, csrf, session, staffArea);

@@ -29,4 +29,28 @@ export class Company extends BaseEntity {
   /** BCP 47 locale for number and money formatting. */
   @Property({ type: 'string', length: 16 })
   locale: string & Opt = 'en-US';
+
+  /** Sites allowed to embed the Ballpark widget and call its API (origins like https://firm.example). */
+  @Property({ type: 'json', defaultRaw: `'[]'` })
+  embedOrigins: string[] & Opt = [];
+
+  /** Who hears about new leads. */
+  @Property({ type: 'json', defaultRaw: `'[]'` })
+  notificationEmails: string[] & Opt = [];
+
+  /** Postcodes (or their leading characters, e.g. "787") the firm serves; empty means anywhere. */
+  @Property({ type: 'json', defaultRaw: `'[]'` })
+  servicePostcodes: string[] & Opt = [];
+
+  /** The firm's brand colour for the widget's primary action (#RRGGBB). */
+  @Property({ type: 'string', length: 7 })
+  brandColor: string & Opt = '#2F6B4F';
+
+  /** Contact phone shown to homeowners in the widget and e-mails. */
+  @Property({ type: 'string', length: 20, nullable: true })
+  phone: string | null = null;
+
+  /** The firm's own website, shown in e-mails. */
+  @Property({ type: 'string', length: 200, nullable: true })
+  website: string | null = null;
 }

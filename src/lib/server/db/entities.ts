@@ -1,7 +1,15 @@
 // Every entity class the ORM knows. Add a new entity here (and create a migration).
 import { Company } from '../companies/company.entity';
+import { FunnelEvent } from '../embed/funnel-event.entity';
+import { Lead } from '../leads/lead.entity';
+import { LeadPhoto } from '../photos/lead-photo.entity';
+import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
 import { Membership } from '../users/membership.entity';
 import { User } from '../users/user.entity';
+import { Session } from '../auth/session.entity';
+import { PasswordReset } from '../auth/password-reset.entity';
+import { Invite } from '../team/invite.entity';
+import { RateLimitEntry } from './rate-limit-entry.entity';
 
-export const entities = [Company, User, Membership, OutboxMail];
+export const entities = [Company, User, Membership, OutboxMail, RateBookVersion, Lead, LeadPhoto, FunnelEvent, Session, PasswordReset, Invite, RateLimitEntry];

@@ -5,6 +5,9 @@ import { Company } from '../../companies/company.entity';
 import { Membership, type Role } from '../../users/membership.entity';
 import { User } from '../../users/user.entity';
 import { hashPassword } from '../../users/password';
+import { RateBookVersion } from '../../rates/rate-book-version.entity';
+import { sampleRateBook, type RateBookInput } from '../../../estimate';
+import { seedDemoLeads } from './demo-leads';
 
 export const DEMO_PASSWORD = 'lapwing-demo-2026';
 
@@ -12,7 +15,13 @@ type DemoFirm = {
   slug: string;
   name: string;
   timeZone: string;
+  brandColor: string;
+  phone: string;
+  servicePostcodes: string[];
+  notificationEmails: string[];
   people: { email: string; name: string; role: Role }[];
+  /** The firm's published numbers: the invented sample rate book with the firm's own changes. */
+  rates: (base: RateBookInput) => RateBookInput;
 };
 
 export const DEMO_FIRMS: DemoFirm[] = [
@@ -20,6 +29,11 @@ export const DEMO_FIRMS: DemoFirm[] = [
     slug: 'cedar-hollow',
     name: 'Cedar Hollow Trim Co.',
     timeZone: 'America/Chicago',
+    brandColor: '#7A4E2D',
+    phone: '+1 512 555 0147',
+    servicePostcodes: ['786', '787'],
+    notificationEmails: ['olive@cedar-hollow.test', 'sam@cedar-hollow.test'],
+    rates: (base) => base,
     people: [
       { email: 'olive@cedar-hollow.test', name: 'Olive Marten', role: 'owner' },
       { email: 'sam@cedar-hollow.test', name: 'Sam Okafor', role: 'sales' },
@@ -30,6 +44,16 @@ export const DEMO_FIRMS: DemoFirm[] = [
     slug: 'northgate',
     name: 'Northgate Wallworks',
     timeZone: 'America/New_York',
+    brandColor: '#1D4E89',
+    phone: '+1 617 555 0123',
+    servicePostcodes: ['021', '022'],
+    notificationEmails: ['nora@northgate.test'],
+    rates: (base) => ({
+      ...base,
+      labour: { ...base.labour, rateCents: 8_500 },
+      minimumJobCents: 120_000,
+      catalogue: { ...base.catalogue, treatments: base.catalogue.treatments.map((t) => (t.id === 'picture-frame' ? { ...t, enabled: false } : t)) },
+    }),
     people: [{ email: 'nora@northgate.test', name: 'Nora Beaumont', role: 'owner' }],
   },
 ];
@@ -41,7 +65,15 @@ export async function seedDemo(em: EntityManager): Promise<string> {
   for (const firm of DEMO_FIRMS) {
     let company = await em.findOne(Company, { slug: firm.slug });
     if (!company) {
-      company = em.create(Company, { slug: firm.slug, name: firm.name, timeZone: firm.timeZone });
+      company = em.create(Company, {
+        slug: firm.slug,
+        name: firm.name,
+        timeZone: firm.timeZone,
+        brandColor: firm.brandColor,
+        phone: firm.phone,
+        servicePostcodes: firm.servicePostcodes,
+        notificationEmails: firm.notificationEmails,
+      });
       created++;
     }
     for (const person of firm.people) {
@@ -58,5 +90,20 @@ export async function seedDemo(em: EntityManager): Promise<string> {
     }
   }
   await em.flush();
+
+  for (const firm of DEMO_FIRMS) {
+    const company = await em.findOneOrFail(Company, { slug: firm.slug });
+    let published = await em.findOne(RateBookVersion, { company, status: 'published' });
+    const rates = firm.rates(sampleRateBook());
+    if (!published) {
+      published = em.create(RateBookVersion, { company, number: 1, status: 'published', data: rates, note: 'Starting rates', publishedAt: new Date() });
+      // A draft the owner is still working on: labour up five per cent.
+      const draft = { ...rates, labour: { ...rates.labour, rateCents: Math.round(rates.labour.rateCents * 1.05) } };
+      em.create(RateBookVersion, { company, number: 2, status: 'draft', data: draft, note: 'Spring prices (draft)' });
+      await em.flush();
+      created += 2;
+    }
+    created += await seedDemoLeads(em, company, published, published.data, firm.servicePostcodes);
+  }
   return created ? `${created} rows added` : 'already present';
 }

@@ -1,0 +1,24 @@
+import type { APIContext, APIRoute } from 'astro';
+import { errorResponse } from '../errors';
+import type { Role } from '../users/membership.entity';
+import { requireStaff, type Staff } from './guard';
+
+/**
+ * Wraps a staff API route: runs the guard (with an optional role), then the handler, and maps every
+ * error to the JSON shape `{"error", "fields"}` with its status.
+ *
+ *   export const GET = staffEndpoint({ role: 'owner' }, ({ staff, locals }) => ...);
+ */
+export function staffEndpoint(
+  options: { role?: Role },
+  handler: (context: APIContext & { staff: Staff }) => Promise<Response> | Response,
+): APIRoute {
+  return async (context) => {
+    try {
+      const staff = requireStaff(context.locals, options);
+      return await handler(Object.assign(context, { staff }));
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}

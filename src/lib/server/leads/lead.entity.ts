@@ -1,0 +1,78 @@
+import { Entity, Index, ManyToOne, Property, Unique, type Opt } from '@mikro-orm/core';
+import { TenantEntity } from '../db/base.entity';
+import type { RateBookVersion } from '../rates/rate-book-version.entity';
+import type { LeadStage } from './stages';
+import type { ContactMethod } from '../../shared/lead-schemas';
+
+/** A homeowner's inquiry: their inputs, the estimate they saw, how to reach them, where it stands. */
+@Entity({ tableName: 'lead' })
+@Unique({ properties: ['company', 'idempotencyKey'] })
+@Index({ properties: ['company', 'createdAt'] })
+export class Lead extends TenantEntity {
+  /** Short code the homeowner and staff can read out on the phone (e.g. `K7MX-42QD`). */
+  @Property({ type: 'string', length: 12 })
+  @Unique()
+  reference!: string;
+
+  @Property({ type: 'string', length: 24 })
+  stage: LeadStage & Opt = 'new';
+
+  /** Where it came from: the Ballpark widget, or entered on the Desk. */
+  @Property({ type: 'string', length: 12 })
+  source: ('widget' | 'desk') & Opt = 'widget';
+
+  @Property({ type: 'string', length: 120 })
+  name!: string;
+
+  @Property({ type: 'string', length: 254 })
+  email!: string;
+
+  /** E.164, e.g. +15125550147. */
+  @Property({ type: 'string', length: 20 })
+  phone!: string;
+
+  @Property({ type: 'string', length: 200 })
+  address!: string;
+
+  @Property({ type: 'string', length: 12 })
+  postcode!: string;
+
+  @Property({ type: 'string', length: 8 })
+  preferredContact!: ContactMethod;
+
+  @Property({ type: 'text', nullable: true })
+  message: string | null = null;
+
+  /** When the homeowner agreed to be contacted about this inquiry. */
+  @Property({ type: 'datetime' })
+  consentAt!: Date;
+
+  /** The project exactly as the homeowner described it. */
+  @Property({ type: 'json' })
+  inputs!: Record<string, unknown>;
+
+  /** The estimate as shown to the homeowner (takeoff, price lines, range, cautions). */
+  @Property({ type: 'json' })
+  estimate!: Record<string, unknown>;
+
+  @ManyToOne({ entity: 'RateBookVersion', deleteRule: 'restrict' })
+  rateBookVersion!: RateBookVersion;
+
+  @Property({ type: 'integer' })
+  rangeLowCents!: number;
+
+  @Property({ type: 'integer' })
+  rangeHighCents!: number;
+
+  /** The client's key for this submission: a retried or double-tapped send makes one lead. */
+  @Property({ type: 'string', length: 64 })
+  idempotencyKey!: string;
+
+  /** The widget session the photos were uploaded under. */
+  @Property({ type: 'uuid', nullable: true })
+  draftId: string | null = null;
+
+  /** Secret for the homeowner's private link to view the estimate later (stored hashed). */
+  @Property({ type: 'string', length: 64, hidden: true })
+  viewTokenHash!: string;
+}

@@ -1,0 +1,22 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { parseRateBook, type RateBook } from '../../estimate';
+import { RateBookVersion } from './rate-book-version.entity';
+import { AppError } from '../errors';
+
+export type PublishedRates = { version: RateBookVersion; rateBook: RateBook };
+
+// A version's numbers never change once published, so its parsed form can be kept per process.
+const parsedByVersion = new Map<string, RateBook>();
+
+/** The firm's published Rate book, parsed. A firm without one cannot give estimates yet (503). */
+export async function publishedRates(em: EntityManager, companyId: string): Promise<PublishedRates> {
+  const version = await em.findOne(RateBookVersion, { company: companyId, status: 'published' }, { orderBy: { number: 'desc' } });
+  if (!version) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
+  let rateBook = parsedByVersion.get(version.id);
+  if (!rateBook) {
+    rateBook = parseRateBook(version.data);
+    if (parsedByVersion.size > 500) parsedByVersion.clear();
+    parsedByVersion.set(version.id, rateBook);
+  }
+  return { version, rateBook };
+}

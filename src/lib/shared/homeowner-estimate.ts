@@ -1,0 +1,22 @@
+import type { Caution, WallTakeoff } from '../estimate/index.ts';
+
+/**
+ * What a homeowner sees of an estimate. The firm's unit rates (price per sheet, labour rate, markup)
+ * stay on the server: the homeowner gets the range, group totals, quantities, drawings and cautions.
+ */
+export type HomeownerEstimate = {
+  units: 'imperial' | 'metric';
+  currency: string;
+  locale: string;
+  range: { lowCents: number; highCents: number; text: string };
+  /** Why the range is as wide as it is, in plain words. */
+  rangeReason: string;
+  minimumApplied: boolean;
+  /** How the middle of the range adds up. */
+  groups: { id: 'materials' | 'labour' | 'extras' | 'tax'; label: string; cents: number }[];
+  extras: string[];
+  rooms: { name: string; treatmentName: string; height: 'wainscot' | 'full'; netSqFt: number; walls: WallTakeoff[] }[];
+  materials: { label: string; quantity: number; unit: string }[];
+  cautions: Caution[];
+  notes: string[];
+};

@@ -1,0 +1,128 @@
+import { expect, test } from '@playwright/test';
+import { GetObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import sharp from 'sharp';
+import { query } from '../helpers/app-database';
+import { waitForMail } from '../helpers/mailbox';
+import { sidewaysPhoneJpeg, smallPng } from '../helpers/photo-files';
+import { signedInAs } from './helpers/staff';
+
+const s3 = new S3Client({
+  endpoint: process.env.S3_ENDPOINT,
+  region: process.env.S3_REGION,
+  forcePathStyle: true,
+  credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID!, secretAccessKey: process.env.S3_SECRET_ACCESS_KEY! },
+  requestChecksumCalculation: 'WHEN_REQUIRED',
+  responseChecksumValidation: 'WHEN_REQUIRED',
+});
+
+test('a homeowner prices two rooms with photos on a firm’s website and sends the inquiry', async ({ page }) => {
+  test.setTimeout(90_000);
+  const email = `homeowner-${Date.now()}@example.test`;
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto('/demo/cedar-hollow');
+  const widget = page.frameLocator('iframe[title="Price your walls"]');
+  await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
+
+  // Room 1 by room size; room 2 wall by wall.
+  await widget.getByLabel('Which room?').first().fill('Dining room');
+  await widget.getByRole('textbox', { name: 'Room length' }).fill("13'");
+  await widget.getByRole('textbox', { name: 'Room width' }).fill("11' 6\"");
+  await widget.getByRole('button', { name: 'Add another room' }).click();
+  const room2 = widget.getByRole('group', { name: 'Room 2' });
+  await room2.getByLabel('Which room?').fill('Hallway');
+  await room2.getByText('Wall by wall').click();
+  await room2.getByLabel('Wall 1 length').fill('12 ft 6 in');
+  await room2.getByRole('button', { name: 'Fewer windows' }).click();
+  await widget.getByRole('button', { name: 'Next' }).click();
+
+  await expect(widget.getByRole('heading', { name: 'Treatment and height' })).toBeVisible();
+  await widget.getByText('Board and batten').click();
+  // The range appears as soon as the inputs allow.
+  await expect(widget.getByTestId('live-range')).toContainText('$', { timeout: 10_000 });
+  await widget.getByRole('button', { name: 'Next' }).click();
+
+  await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
+  await widget.getByText('Not sure').click();
+  await widget.getByRole('button', { name: 'Next' }).click();
+
+  await expect(widget.getByRole('heading', { name: 'Photos', exact: true })).toBeVisible();
+  await widget.locator('input[type=file]').setInputFiles([
+    { name: 'dining.jpg', mimeType: 'image/jpeg', buffer: await sidewaysPhoneJpeg() },
+    { name: 'hall.png', mimeType: 'image/png', buffer: await smallPng() },
+  ]);
+  const photoList = widget.getByRole('list', { name: 'Your photos' });
+  await expect(photoList.getByText('Added.', { exact: true })).toHaveCount(2, { timeout: 30_000 });
+  await widget.getByRole('button', { name: 'Next' }).click();
+
+  await expect(widget.getByRole('heading', { name: 'Your ballpark', exact: true })).toBeVisible();
+  await expect(widget.getByTestId('result-range')).toHaveAttribute('aria-busy', 'false');
+  const range = (await widget.getByTestId('result-range').textContent())!.trim();
+  expect(range).toMatch(/^\$[\d,]+ – \$[\d,]+$/);
+  await expect(widget.getByRole('img', { name: /drawn to scale/ }).first()).toBeVisible();
+  await expect(widget.getByText('Good to know before the work starts')).toBeVisible();
+  await expect(widget.getByText(/lead-safe/i).first()).toBeVisible();
+  await widget.getByRole('button', { name: /Send it to/ }).click();
+
+  await expect(widget.getByRole('heading', { name: 'Your details' })).toBeVisible();
+  // A bad phone and a postcode outside the service area get field messages first.
+  await widget.getByRole('textbox', { name: 'Your name', exact: true }).fill('Dana Whitfield');
+  await widget.getByRole('textbox', { name: 'E-mail', exact: true }).fill(email);
+  await widget.getByRole('textbox', { name: 'Phone', exact: true }).fill('12');
+  await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('418 Larkspur Ct');
+  await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('10001');
+  await widget.getByRole('button', { name: /Send to/ }).click();
+  await expect(widget.getByText('Enter a phone number we can call')).toBeVisible();
+  await expect(widget.getByText('Please agree to be contacted')).toBeVisible();
+  await widget.getByRole('textbox', { name: 'Phone', exact: true }).fill('(512) 555-0188');
+  await widget.getByLabel(/may contact me/).check();
+  await widget.getByRole('button', { name: /Send to/ }).click();
+  await expect(widget.getByText(/doesn't work in 10001 yet/)).toBeVisible();
+  await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
+  await widget.getByRole('button', { name: /Send to/ }).click();
+
+  await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
+  const reference = (await widget.locator('strong.figures').textContent())!.trim();
+
+  // The lead is stored with its estimate snapshot, the rate-book version and both photos.
+  const [lead] = await query<{ id: string; phone: string; range_low_cents: number; photos: string; version: number }>(
+    `select l.id, l.phone, l.range_low_cents, v.number as version,
+            (select count(*) from lead_photo p where p.lead_id = l.id and p.status = 'ready') as photos
+       from lead l join rate_book_version v on v.id = l.rate_book_version_id where l.reference = $1`,
+    [reference],
+  );
+  expect(lead).toBeDefined();
+  expect(lead!.phone).toBe('+15125550188');
+  expect(Number(lead!.photos)).toBe(2);
+  expect(lead!.version).toBe(1);
+
+  // The stored photos carry no location or other metadata, and the sideways one is upright.
+  const photoRows = await query<{ image_key: string; width: number; height: number }>(`select image_key, width, height from lead_photo where lead_id = $1`, [lead!.id]);
+  for (const row of photoRows) {
+    const object = await s3.send(new GetObjectCommand({ Bucket: process.env.S3_BUCKET, Key: row.image_key }));
+    const bytes = Buffer.from(await object.Body!.transformToByteArray());
+    const meta = await sharp(bytes).metadata();
+    expect(meta.exif).toBeUndefined();
+    expect(meta.width).toBe(row.width);
+  }
+  expect(photoRows.some((row) => row.height > row.width)).toBe(true);
+
+  // Both e-mails arrive with the same range the homeowner saw.
+  const confirmation = await waitForMail({ to: email, subject: 'Your ballpark estimate', timeoutMs: 15_000 });
+  expect(confirmation.text).toContain(range);
+  expect(confirmation.text).toContain(reference);
+  const alert = await waitForMail({ to: 'olive@cedar-hollow.test', subject: reference, timeoutMs: 15_000 });
+  expect(alert.text).toContain(range);
+  expect(alert.text).toContain(`/app/leads/${lead!.id}`);
+
+  // The homeowner's private link shows the same estimate; the firm's lead page shows it with photos.
+  const viewUrl = confirmation.text.match(/https?:\/\/\S+\/estimate\/\S+/)![0];
+  await page.goto(viewUrl);
+  await expect(page.getByTestId('result-range')).toHaveText(range);
+  const olive = await signedInAs('olive@cedar-hollow.test');
+  const staffPage = await olive.get(`/app/leads/${lead!.id}`);
+  expect(staffPage.status()).toBe(200);
+  const html = await staffPage.text();
+  expect(html).toContain(range);
+  expect(html.match(/<img [^>]*alt="Photo /g)).toHaveLength(2);
+  await olive.dispose();
+});

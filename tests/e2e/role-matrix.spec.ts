@@ -1,0 +1,153 @@
+import { readdirSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { expect, test, type APIRequestContext } from '@playwright/test';
+import { signedInAs, signedOut } from './helpers/staff';
+import { query } from '../helpers/app-database';
+
+/**
+ * Every staff route, with the status each kind of caller gets. `other` is the owner of the second
+ * demo firm using the first firm's ids: ids must answer 404 (not 403), so they are not confirmed.
+ * Add a row for every new file under src/pages/app or src/pages/api/app; the last test fails otherwise.
+ */
+type Who = 'signedOut' | 'sales' | 'other' | 'owner';
+type Ids = { samMember: string; oliveMember: string; invite: string; lead: string };
+type Row = {
+  route: string;
+  method: 'GET' | 'POST' | 'PATCH' | 'DELETE';
+  path: (ids: Ids) => string;
+  json?: unknown;
+  form?: (ids: Ids) => Record<string, string>;
+  expect: Record<Who, number>;
+};
+
+const MATRIX: Row[] = [
+  { route: '/app', method: 'GET', path: () => '/app', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
+  { route: '/app/leads/[id]', method: 'GET', path: (ids) => `/app/leads/${ids.lead}`, expect: { signedOut: 302, sales: 200, other: 404, owner: 200 } },
+  { route: '/app/visits', method: 'GET', path: () => '/app/visits', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
+  { route: '/app/rates', method: 'GET', path: () => '/app/rates', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  { route: '/app/setup', method: 'GET', path: () => '/app/setup', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  { route: '/app/setup/team', method: 'GET', path: () => '/app/setup/team', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  {
+    route: '/app/setup/team',
+    method: 'POST',
+    path: () => '/app/setup/team',
+    // Sets Sam's role to what it already is: allowed callers change nothing.
+    form: (ids) => ({ intent: 'role', id: ids.samMember, role: 'sales' }),
+    expect: { signedOut: 302, sales: 403, other: 404, owner: 303 },
+  },
+  { route: '/app/account', method: 'GET', path: () => '/app/account', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
+  { route: '/api/app/me', method: 'GET', path: () => '/api/app/me', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
+  { route: '/api/app/team', method: 'GET', path: () => '/api/app/team', expect: { signedOut: 401, sales: 403, other: 200, owner: 200 } },
+  {
+    route: '/api/app/team/invites',
+    method: 'POST',
+    path: () => '/api/app/team/invites',
+    json: { email: 'matrix-newcomer@firm.test', role: 'sales' },
+    // The other firm's owner invites to their own firm: allowed, and it touches nothing of the first firm.
+    expect: { signedOut: 401, sales: 403, other: 201, owner: 201 },
+  },
+  {
+    route: '/api/app/team/invites/[id]',
+    method: 'DELETE',
+    path: (ids) => `/api/app/team/invites/${ids.invite}`,
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 204 },
+  },
+  {
+    route: '/api/app/team/members/[id]',
+    method: 'PATCH',
+    path: (ids) => `/api/app/team/members/${ids.samMember}`,
+    json: { role: 'sales' },
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 200 },
+  },
+  {
+    route: '/api/app/team/members/[id]',
+    method: 'DELETE',
+    // Olive is the only owner: the owner's own call is refused as "last owner" (409), never done.
+    path: (ids) => `/api/app/team/members/${ids.oliveMember}`,
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 409 },
+  },
+];
+
+// Owners last, so the destructive calls of everyone else meet the rows still in place.
+const CALLERS: Who[] = ['signedOut', 'sales', 'other', 'owner'];
+
+let clients: Record<Who, APIRequestContext>;
+let ids: Ids;
+
+test.beforeAll(async () => {
+  clients = {
+    signedOut: await signedOut(),
+    sales: await signedInAs('sam@cedar-hollow.test'),
+    other: await signedInAs('nora@northgate.test'),
+    owner: await signedInAs('olive@cedar-hollow.test'),
+  };
+  const invite = await clients.owner.post('/api/app/team/invites', { data: { email: 'matrix-target@cedar-hollow.test', role: 'sales' } });
+  expect(invite.status()).toBe(201);
+  const team = await (await clients.owner.get('/api/app/team')).json();
+  const member = (email: string) => team.members.find((m: { email: string }) => m.email === email).id;
+  const [lead] = await query<{ id: string }>(`select l.id from lead l join company c on c.id = l.company_id where c.slug = 'cedar-hollow' limit 1`);
+  ids = { samMember: member('sam@cedar-hollow.test'), oliveMember: member('olive@cedar-hollow.test'), invite: (await invite.json()).id, lead: lead!.id };
+});
+
+test.afterAll(async () => {
+  await Promise.all(Object.values(clients ?? {}).map((client) => client.dispose()));
+});
+
+function call(client: APIRequestContext, row: Row) {
+  const url = row.path(ids);
+  const options = { maxRedirects: 0, ...(row.json ? { data: row.json } : {}), ...(row.form ? { form: row.form(ids) } : {}) };
+  return client.fetch(url, { method: row.method, ...options });
+}
+
+test('every staff route answers each kind of caller as the matrix says', async () => {
+  test.setTimeout(60_000);
+  const firstFirmTeamBefore = await (await clients.owner.get('/api/app/team')).json();
+  const seen: string[] = [];
+  for (const row of MATRIX) {
+    for (const who of CALLERS) {
+      const response = await call(clients[who], row);
+      seen.push(`${row.method} ${row.route} as ${who}: ${response.status()}`);
+      if (who === 'signedOut' && response.status() === 302) expect(response.headers().location).toMatch(/^\/login\?next=/);
+      if (response.status() >= 400 && row.route.startsWith('/api/')) expect(await response.json()).toHaveProperty('error');
+    }
+  }
+  expect(seen).toEqual(MATRIX.flatMap((row) => CALLERS.map((who) => `${row.method} ${row.route} as ${who}: ${row.expect[who]}`)));
+
+  // Nothing the other firm (or sales) tried changed the first firm's team; only the owner's own
+  // withdrawal of the invitation did.
+  const after = await (await clients.owner.get('/api/app/team')).json();
+  expect(after.members).toEqual(firstFirmTeamBefore.members);
+  expect(after.invites.map((i: { id: string }) => i.id)).not.toContain(ids.invite);
+});
+
+test('the other firm sees only its own people and cannot switch into the first firm', async () => {
+  const team = await (await clients.other.get('/api/app/team')).json();
+  expect(team.members.map((m: { email: string }) => m.email)).toEqual(['nora@northgate.test']);
+  const page = await (await clients.other.get('/app/setup/team')).text();
+  expect(page).not.toContain('cedar-hollow.test');
+  const me = await (await clients.owner.get('/api/app/me')).json();
+  const switched = await clients.other.post('/api/auth/firm', { form: { companyId: me.firm.id }, maxRedirects: 0 });
+  expect(switched.status()).toBe(404);
+  expect((await (await clients.other.get('/api/app/me')).json()).firm.name).toBe('Northgate Wallworks');
+});
+
+function routeOf(file: string, root: string, prefix: string): string {
+  const relative = path.relative(root, file).replace(/\.(astro|ts)$/, '').replace(/(^|\/)index$/, '');
+  return relative ? `${prefix}/${relative}` : prefix;
+}
+
+function routeFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((entry) => {
+    const full = path.join(dir, entry);
+    return statSync(full).isDirectory() ? routeFiles(full) : [full];
+  });
+}
+
+test('the matrix lists every staff route file', () => {
+  const routes = [
+    ...routeFiles('src/pages/app').map((f) => routeOf(f, 'src/pages/app', '/app')),
+    ...routeFiles('src/pages/api/app').map((f) => routeOf(f, 'src/pages/api/app', '/api/app')),
+  ];
+  const listed = new Set(MATRIX.map((row) => row.route));
+  expect(routes.filter((route) => !listed.has(route))).toEqual([]);
+});
