@@ -59,12 +59,16 @@ export class TooManyRequests extends AppError {
   }
 }
 
-/** Turns a zod error into field paths and messages. */
-export function fieldsFromZod(issues: { path: PropertyKey[]; message: string }[]): Record<string, string> {
+/** Turns zod issues into field paths and messages; an unknown key is reported under its own name. */
+export function fieldsFromZod(issues: { path: PropertyKey[]; message: string; code?: string; keys?: string[] }[]): Record<string, string> {
   const fields: Record<string, string> = {};
+  const put = (path: PropertyKey[], message: string) => {
+    fields[path.map(String).join('.') || '_'] ??= message;
+  };
   for (const issue of issues) {
-    const path = issue.path.map(String).join('.') || '_';
-    fields[path] ??= issue.message;
+    if (issue.code === 'unrecognized_keys' && issue.keys) {
+      for (const key of issue.keys) put([...issue.path, key], `Unknown field "${key}"; remove it.`);
+    } else put(issue.path, issue.message);
   }
   return fields;
 }

@@ -1,0 +1,122 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import type { MikroORM } from '@mikro-orm/postgresql';
+import { getOrm } from '../../src/lib/server/db/orm';
+import { Company } from '../../src/lib/server/companies/company.entity';
+import { issueFormToken } from '../../src/lib/server/embed/form-token';
+import { InvalidInput } from '../../src/lib/server/errors';
+import { Lead } from '../../src/lib/server/leads/lead.entity';
+import { submitLead, type LeadRequest } from '../../src/lib/server/leads/lead.service';
+import { deliverDueMail } from '../../src/lib/server/mail/outbox';
+import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
+import { createSmtpSender } from '../../src/lib/server/mail/transport';
+import { leadRequestSchema } from '../../src/lib/shared/lead-schemas';
+import { freeLoopbackPort } from '../helpers/ports';
+import { mailTo, waitForMail } from '../helpers/mailbox';
+
+let orm: MikroORM;
+let cedar: Company;
+let northgate: Company;
+
+beforeAll(async () => {
+  orm = await getOrm();
+  cedar = await orm.em.fork().findOneOrFail(Company, { slug: 'cedar-hollow' });
+  northgate = await orm.em.fork().findOneOrFail(Company, { slug: 'northgate' });
+});
+afterAll(async () => {
+  await orm.close();
+});
+
+/** A submission as the widget sends it, from a form opened a minute ago. */
+function submission(company: Company, overrides: Partial<LeadRequest['contact']> = {}, extra: Record<string, unknown> = {}): LeadRequest {
+  const { token } = issueFormToken(company.id, Date.now() - 60_000);
+  return leadRequestSchema.parse({
+    formToken: token,
+    idempotencyKey: randomUUID(),
+    project: {
+      rooms: [{ name: 'Dining room', ceilingHeight: 96, length: 156, width: 132, walls: [{ side: 'length' }, { side: 'width', openings: [{ kind: 'door' }] }], treatment: { id: 'beadboard', height: 'wainscot' } }],
+      builtBefore1978: 'no',
+      measuredBy: 'homeowner-tape',
+    },
+    contact: {
+      name: 'Ada Greenleaf',
+      email: `ada-${randomUUID().slice(0, 8)}@example.test`,
+      phone: '(512) 555-0161',
+      address: '27 Tanager St',
+      postcode: '78704',
+      preferredContact: 'email',
+      consent: true,
+      ...overrides,
+    },
+    ...extra,
+  });
+}
+
+describe('sending a lead', () => {
+  test('with the SMTP server down, the lead is stored and its e-mails wait in the outbox, then go out once it is back', async () => {
+    const request = submission(cedar);
+    const result = await submitLead(orm.em.fork(), cedar, request);
+    expect(result.stored).toBe(true);
+    expect(result.viewUrl).toMatch(/\/estimate\/[0-9a-f-]{36}\?key=/);
+
+    const em = orm.em.fork();
+    const lead = await em.findOneOrFail(Lead, { company: cedar, idempotencyKey: request.idempotencyKey });
+    expect(lead.phone).toBe('+15125550161');
+    expect(lead.rangeLowCents).toBeLessThanOrEqual(lead.rangeHighCents);
+    const queued = await em.find(OutboxMail, { company: cedar, subject: { $like: `%${lead.reference}%` } });
+    // The firm's alert goes to each notification recipient; the homeowner's confirmation carries the range.
+    expect(queued.map((m) => m.toAddress).sort()).toEqual([...cedar.notificationEmails].sort());
+
+    // SMTP down: a real SMTP client against a loopback port where nothing listens.
+    const down = createSmtpSender(`smtp://127.0.0.1:${await freeLoopbackPort()}`);
+    await deliverDueMail(orm.em.fork(), { send: down, limit: 500 });
+    const waiting = await orm.em.fork().findOneOrFail(OutboxMail, { toAddress: request.contact.email });
+    expect(waiting.status).toBe('queued');
+    expect(await mailTo(request.contact.email)).toHaveLength(0);
+
+    // Back up, and the retry is due: delivered exactly once.
+    await orm.em.fork().nativeUpdate(OutboxMail, { toAddress: request.contact.email }, { nextAttemptAt: new Date(Date.now() - 1000) });
+    await deliverDueMail(orm.em.fork(), { limit: 500 });
+    const mail = await waitForMail({ to: request.contact.email, subject: 'Your ballpark estimate' });
+    expect(mail.text).toContain(lead.reference);
+    expect(await mailTo(request.contact.email)).toHaveLength(1);
+  });
+
+  test('the same idempotency key sent twice at once makes one lead and one answer', async () => {
+    const request = submission(cedar);
+    const [a, b] = await Promise.all([submitLead(orm.em.fork(), cedar, request), submitLead(orm.em.fork(), cedar, request)]);
+    expect(a.reference).toBe(b.reference);
+    expect(await orm.em.fork().count(Lead, { company: cedar, idempotencyKey: request.idempotencyKey })).toBe(1);
+  });
+
+  test('a postcode outside the service area is refused on that field, politely', async () => {
+    const error = await submitLead(orm.em.fork(), cedar, submission(cedar, { postcode: '10001' })).catch((e) => e);
+    expect(error).toBeInstanceOf(InvalidInput);
+    expect(error.fields['contact.postcode']).toMatch(/doesn't work in 10001 yet/);
+  });
+
+  test('a filled-in hidden field or a form sent within seconds of opening looks accepted but stores nothing', async () => {
+    const bot = submission(cedar, {}, { website: 'http://spam.example' });
+    expect((await submitLead(orm.em.fork(), cedar, bot)).stored).toBe(false);
+    const { token } = issueFormToken(cedar.id);
+    const hasty = { ...submission(cedar), formToken: token };
+    expect((await submitLead(orm.em.fork(), cedar, hasty)).stored).toBe(false);
+    const keys = [bot.idempotencyKey, hasty.idempotencyKey];
+    expect(await orm.em.fork().count(Lead, { idempotencyKey: { $in: keys } })).toBe(0);
+  });
+
+  test('a form token of one firm is refused by another', async () => {
+    const error = await submitLead(orm.em.fork(), northgate, submission(cedar)).catch((e) => e);
+    expect(error).toBeInstanceOf(InvalidInput);
+    expect(Object.keys(error.fields)).toEqual(['formToken']);
+  });
+
+  test('a treatment the firm does not offer is refused with a field path', async () => {
+    const request = submission(northgate);
+    request.project.rooms[0]!.treatment.id = 'picture-frame';
+    request.contact.postcode = '02134';
+    const error = await submitLead(orm.em.fork(), northgate, request).catch((e) => e);
+    expect(error).toBeInstanceOf(InvalidInput);
+    expect(Object.keys(error.fields)[0]).toMatch(/^project\.rooms\.0\.treatment/);
+  });
+});
