@@ -6,9 +6,9 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import { ensureNodeModules, ensurePostgres, fail, root } from './lib/setup.mjs';
+import { ensureNodeModules, ensurePostgres, fail, portInUse, root } from './lib/setup.mjs';
 import { clusterIsRunning, ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
-import { appEnv } from './lib/services.mjs';
+import { appEnv, startChild, stopChildren } from './lib/services.mjs';
 import { dataDir, devClusterDir } from './lib/dev-cluster.mjs';
 
 const [command, ...rest] = process.argv.slice(2);
@@ -22,6 +22,16 @@ if (!wasRunning) startCluster(cluster);
 const secretFile = path.join(dataDir, 'app-secret');
 const appSecret = existsSync(secretFile) ? readFileSync(secretFile, 'utf8').trim() : 'development-only-secret-not-for-production-use';
 const env = appEnv({ cluster, database: 'lapwing', s3Port: 4569, smtpPort: 2525, appPort: 4321, appSecret, mailDir: path.join(dataDir, 'mail') });
+
+// Seeding stores demo photos, so it needs the S3 stand-in; start the stand-ins unless `npm start` runs them.
+const s3Port = 4569;
+if (['reset', 'seed-demo'].includes(command) && !(await portInUse(s3Port))) {
+  const standIns = startChild('stand-ins', process.execPath, ['scripts/stand-ins.mjs'], {
+    env: { ...env, STANDIN_DIR: dataDir, S3_PORT: String(s3Port), SMTP_PORT: '2525', APP_ORIGIN: env.PUBLIC_ORIGIN },
+    readyLine: 'stand-ins ready',
+  });
+  await standIns.ready;
+}
 
 let status = 0;
 try {
@@ -37,6 +47,7 @@ try {
     status = spawnSync(path.join(root, 'node_modules/.bin/tsx'), argv, { cwd: root, env, stdio: 'inherit' }).status ?? 1;
   }
 } finally {
+  await stopChildren();
   if (!wasRunning) stopCluster(cluster);
 }
 process.exit(status);

@@ -37,6 +37,19 @@ ensureDatabase(cluster, 'lapwing');
 const mailDir = path.join(dataDir, 'mail');
 const env = { ...appEnv({ cluster, database: 'lapwing', s3Port, smtpPort, appPort, appSecret, mailDir }), HOST: host };
 
+async function waitForHealth(url, timeoutMs = 120_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`The app did not answer ${url} within ${timeoutMs / 1000} s.`);
+}
+
 let shuttingDown = false;
 async function shutdown(code) {
   if (shuttingDown) return;
@@ -66,13 +79,15 @@ try {
     : [process.execPath, ['dist/server/entry.mjs']];
   const server = startChild('app server', command, args, { env, onExit: (code) => shutdown(code || 1) });
   await server.ready;
+  // The first request also starts the app's mail delivery loop, so queued mail goes out at once.
+  await waitForHealth(`http://${host}:${appPort}/api/health`);
 } catch (error) {
   process.stderr.write(`${error instanceof Error ? error.message : error}\n`);
   await shutdown(1);
 }
 
 const origin = `http://${host}:${appPort}`;
-log(`Lapwing is starting at ${origin}
+log(`Lapwing is ready at ${origin}
     Landing page      ${origin}/
     Staff sign-in     ${origin}/login
     Demo firm page    ${origin}/demo/cedar-hollow

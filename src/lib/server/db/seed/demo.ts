@@ -8,6 +8,7 @@ import { hashPassword } from '../../users/password';
 import { RateBookVersion } from '../../rates/rate-book-version.entity';
 import { sampleRateBook, type RateBookInput } from '../../../estimate';
 import { seedDemoLeads } from './demo-leads';
+import { seedDemoPhotos } from './demo-photos';
 
 export const DEMO_PASSWORD = 'lapwing-demo-2026';
 
@@ -104,6 +105,7 @@ export async function seedDemo(em: EntityManager): Promise<string> {
       created += 2;
     }
     created += await seedDemoLeads(em, company, published, published.data, firm.servicePostcodes);
+    created += await seedDemoPhotos(em, company);
   }
   return created ? `${created} rows added` : 'already present';
 }
