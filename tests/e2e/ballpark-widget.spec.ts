@@ -100,6 +100,13 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   expect(Number(lead!.photos)).toBe(2);
   expect(lead!.version).toBe(1);
 
+  // The visit counted once at each step of the funnel, for this firm only.
+  const steps = await query<{ step: string }>(
+    `select f.step from funnel_event f join lead l on l.draft_id = f.draft_id and l.company_id = f.company_id where l.id = $1 order by f.created_at`,
+    [lead!.id],
+  );
+  expect(steps.map((s) => s.step)).toEqual(['widget-opened', 'first-estimate', 'lead-sent']);
+
   // The stored photos carry no location or other metadata, and the sideways one is upright.
   const photoRows = await query<{ image_key: string; width: number; height: number }>(`select image_key, width, height from lead_photo where lead_id = $1`, [lead!.id]);
   for (const row of photoRows) {
@@ -132,4 +139,18 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   expect(html).toContain(range);
   expect(html.match(/<img [^>]*alt="Photo /g)).toHaveLength(2);
   await olive.dispose();
+});
+
+test('the floating button loads nothing until pressed, then opens the widget in a panel', async ({ page }) => {
+  await page.goto('/demo/northgate?mode=floating');
+  const button = page.getByRole('button', { name: 'Price your walls' });
+  await expect(button).toBeVisible();
+  await expect(page.locator('iframe')).toHaveCount(0);
+  await button.click();
+  await expect(button).toHaveAttribute('aria-expanded', 'true');
+  const panel = page.getByRole('dialog', { name: 'Price your walls' });
+  await expect(panel.frameLocator('iframe').getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
+  await panel.getByRole('button', { name: 'Close' }).click();
+  await expect(panel).toBeHidden();
+  await expect(button).toHaveAttribute('aria-expanded', 'false');
 });

@@ -19,6 +19,8 @@ test('every step of the widget passes axe at WCAG 2.2 AA on a 320 px wide phone,
   // Nothing is wider than the phone.
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(320);
 
+  // The primary action wears the firm's brand colour (Cedar Hollow's demo colour #7A4E2D).
+  await expect(page.getByRole('button', { name: 'Next' })).toHaveCSS('background-color', 'rgb(122, 78, 45)');
   await page.getByRole('button', { name: 'Next' }).click();
   // Each step moves focus to its heading for screen reader users.
   await expect(page.getByRole('heading', { name: 'Treatment and height' })).toBeFocused();
