@@ -1,4 +1,5 @@
-import { useId, useState } from 'react';
+import { useState } from 'react';
+import { LengthField } from '../forms/LengthField';
 import { boardRun } from '../../lib/estimate/board-run';
 import { formatLength, parseLength } from '../../lib/estimate/units';
 
@@ -17,7 +18,6 @@ export default function BoardRunTry() {
   const [wall, setWall] = useState("11' 4\"");
   const [board, setBoard] = useState('5 1/2');
   const [gap, setGap] = useState('1/8');
-  const ids = { wall: useId(), board: useId(), gap: useId() };
   const inputs = { wall: parse(wall), board: parse(board), gap: parse(gap) };
 
   let result: string;
@@ -31,27 +31,11 @@ export default function BoardRunTry() {
     result = `${run.count} boards, ${last}.`;
   }
 
-  const field = (id: string, label: string, value: string, set: (v: string) => void, parsed: Parsed) => (
-    <div>
-      <label htmlFor={id} className="field-label">
-        {label}
-      </label>
-      <input
-        id={id}
-        className="field-input figures"
-        value={value}
-        inputMode="decimal"
-        aria-invalid={!parsed.ok}
-        onChange={(event) => set(event.target.value)}
-      />
-    </div>
-  );
-
   return (
     <fieldset className="mt-4 grid max-w-2xl gap-4 rounded-lg border border-slate/20 bg-white p-5 sm:grid-cols-3" aria-label="Try a wall">
-      {field(ids.wall, 'Wall width', wall, setWall, inputs.wall)}
-      {field(ids.board, 'Board width', board, setBoard, inputs.board)}
-      {field(ids.gap, 'Gap between boards', gap, setGap, inputs.gap)}
+      <LengthField label="Wall width" value={wall} onChange={setWall} error={inputs.wall.ok ? undefined : inputs.wall.message} />
+      <LengthField label="Board width" value={board} onChange={setBoard} error={inputs.board.ok ? undefined : inputs.board.message} />
+      <LengthField label="Gap between boards" value={gap} onChange={setGap} error={inputs.gap.ok ? undefined : inputs.gap.message} />
       <p className="figures sm:col-span-3 text-lg font-medium" data-testid="board-result" aria-live="polite">
         {result}
       </p>

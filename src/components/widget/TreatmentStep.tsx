@@ -1,4 +1,4 @@
-import { LengthField } from './LengthField';
+import { LengthField } from '../forms/LengthField';
 import { TreatmentIcon } from './TreatmentIcon';
 import type { Draft, FieldErrors } from './draft';
 

@@ -59,20 +59,6 @@ export class TooManyRequests extends AppError {
   }
 }
 
-/** Turns zod issues into field paths and messages; an unknown key is reported under its own name. */
-export function fieldsFromZod(issues: { path: PropertyKey[]; message: string; code?: string; keys?: string[] }[]): Record<string, string> {
-  const fields: Record<string, string> = {};
-  const put = (path: PropertyKey[], message: string) => {
-    fields[path.map(String).join('.') || '_'] ??= message;
-  };
-  for (const issue of issues) {
-    if (issue.code === 'unrecognized_keys' && issue.keys) {
-      for (const key of issue.keys) put([...issue.path, key], `Unknown field "${key}"; remove it.`);
-    } else put(issue.path, issue.message);
-  }
-  return fields;
-}
-
 /** Maps any thrown value to a JSON response; unknown errors become a logged 500 with no detail. */
 export function errorResponse(error: unknown, extraHeaders: Record<string, string> = {}): Response {
   if (error instanceof AppError) {

@@ -1,5 +1,6 @@
 import type { z } from 'zod';
-import { InvalidInput, UnsupportedMediaType, fieldsFromZod } from './errors';
+import { fieldsFromZod } from '../estimate/errors.ts';
+import { InvalidInput, UnsupportedMediaType } from './errors';
 
 /** Largest JSON body an endpoint reads; bigger bodies are refused before parsing. */
 const MAX_JSON_BYTES = 256 * 1024;
@@ -20,7 +21,7 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S)
     throw new InvalidInput('The request body is not valid JSON.');
   }
   const parsed = schema.safeParse(data);
-  if (!parsed.success) throw new InvalidInput('Some fields need attention.', fieldsFromZod(parsed.error.issues));
+  if (!parsed.success) throw new InvalidInput('Some fields need attention.', fieldsFromZod(parsed.error));
   return parsed.data;
 }
 
@@ -53,6 +54,6 @@ export async function readForm(request: Request): Promise<Record<string, string>
 /** Validates already-read input with a zod schema; invalid fields become one InvalidInput. */
 export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
   const parsed = schema.safeParse(input);
-  if (!parsed.success) throw new InvalidInput('Some fields need attention.', fieldsFromZod(parsed.error.issues));
+  if (!parsed.success) throw new InvalidInput('Some fields need attention.', fieldsFromZod(parsed.error));
   return parsed.data;
 }
