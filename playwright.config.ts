@@ -23,7 +23,7 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'node dist/server/entry.mjs',
+    command: 'node scripts/serve.mjs',
     url: `${baseURL}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,

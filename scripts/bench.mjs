@@ -1,7 +1,7 @@
 // `npm run bench`: runs every bench/*.bench.ts (or those whose name contains the first argument).
 // Each prints its figures and writes bench/results/<name>.json; a summary table follows.
 // Benchmarks get the same throwaway environment as the tests (database, stand-ins, a production
-// build), so those that need a running app can start `node dist/server/entry.mjs` with `process.env`.
+// build), so those that need a running app can start `node scripts/serve.mjs` with `process.env`.
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';

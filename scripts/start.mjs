@@ -76,7 +76,7 @@ try {
   if (!dev) buildIfNeeded(env);
   const [command, args] = dev
     ? [path.join(root, 'node_modules', '.bin', 'astro'), ['dev', '--host', host, '--port', String(appPort)]]
-    : [process.execPath, ['dist/server/entry.mjs']];
+    : [process.execPath, ['scripts/serve.mjs']];
   const server = startChild('app server', command, args, { env, onExit: (code) => shutdown(code || 1) });
   await server.ready;
   // The first request also starts the app's mail delivery loop, so queued mail goes out at once.

@@ -5,8 +5,10 @@
  * bottom; the SVG scales to its container, so it stays readable on a phone.
  */
 import { useId } from 'react';
-import type { Units, WallPiece, WallTakeoff } from '../../lib/estimate/index.ts';
-import { formatLength, wallSummary } from '../../lib/estimate/index.ts';
+// Direct module imports keep the browser bundle free of the core's schemas (and zod).
+import type { WallPiece, WallTakeoff } from '../../lib/estimate/types.ts';
+import { wallSummary } from '../../lib/estimate/summary.ts';
+import { formatLength, type Units } from '../../lib/estimate/units.ts';
 
 export interface WallDrawingProps {
   wall: WallTakeoff;

@@ -1,15 +1,20 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { Suspense, lazy, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { Units } from '../../lib/estimate/index.ts';
 import type { ContactInput } from '../../lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
-import { ContactStep } from './ContactStep';
 import { newDraft, normaliseServerErrors, toProject, type Draft } from './draft';
 import { OptionsStep } from './OptionsStep';
-import PhotoPicker from './PhotoPicker';
 import { ResultView } from './ResultView';
 import { RoomsStep } from './RoomsStep';
 import { TreatmentStep, type OfferedTreatment } from './TreatmentStep';
+
+// The photo and contact steps carry the heavier libraries (dropzone, form validation, phone
+// numbers); they load in the background once the homeowner is past the first step.
+const loadContactStep = () => import('./ContactStep');
+const loadPhotoPicker = () => import('./PhotoPicker');
+const ContactStep = lazy(() => loadContactStep().then((module) => ({ default: module.ContactStep })));
+const PhotoPicker = lazy(loadPhotoPicker);
 
 export type BallparkWidgetProps = {
   slug: string;
@@ -81,6 +86,10 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
 
   useEffect(() => {
     headingRef.current?.focus();
+    if (step >= 1) {
+      void loadPhotoPicker();
+      void loadContactStep();
+    }
   }, [step, sent]);
 
   const stepErrorKeys: Record<(typeof STEPS)[number]['id'], (path: string) => boolean> = {
@@ -147,7 +156,9 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
         {current.id === 'photos' && (
           <div className="space-y-3">
             <p className="text-slate">Photos of the walls help {firmName} give you a tighter range. Up to 10, optional.</p>
-            <PhotoPicker slug={slug} formToken={formToken} onChange={setPhotos} onBusyChange={setPhotosBusy} />
+            <Suspense fallback={<p role="status">Getting the photo picker ready…</p>}>
+              <PhotoPicker slug={slug} formToken={formToken} onChange={setPhotos} onBusyChange={setPhotosBusy} />
+            </Suspense>
           </div>
         )}
         {current.id === 'result' &&
@@ -159,7 +170,9 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
         {current.id === 'contact' && (
           <>
             <p className="mb-4 text-slate">Leave your details and {firmName} will call to arrange a visit. No obligation.</p>
-            <ContactStep firmName={firmName} sending={sending} serverErrors={sendError?.fields ?? {}} onSubmit={send} />
+            <Suspense fallback={<p role="status">Getting the form ready…</p>}>
+              <ContactStep firmName={firmName} sending={sending} serverErrors={sendError?.fields ?? {}} onSubmit={send} />
+            </Suspense>
             {sendError && (
               <p role="alert" className="field-error mt-3">
                 {sendError.status === 400 && Object.keys(sendError.fields).some((k) => !k.startsWith('contact.')) ? 'Some earlier answers need another look. ' : ''}

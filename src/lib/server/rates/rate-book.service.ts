@@ -8,9 +8,20 @@ export type PublishedRates = { version: RateBookVersion; rateBook: RateBook };
 // A version's numbers never change once published, so its parsed form can be kept per process.
 const parsedByVersion = new Map<string, RateBook>();
 
+/**
+ * How long a process may keep answering with the version it last saw as published. Publishing a new
+ * version reaches every process within this time (publishing code may also clear the cache key).
+ */
+export const PUBLISHED_RATES_CACHE_MS = 10_000;
+export const publishedRatesCacheKey = (companyId: string) => `published-rates:${companyId}`;
+
 /** The firm's published Rate book, parsed. A firm without one cannot give estimates yet (503). */
 export async function publishedRates(em: EntityManager, companyId: string): Promise<PublishedRates> {
-  const version = await em.findOne(RateBookVersion, { company: companyId, status: 'published' }, { orderBy: { number: 'desc' } });
+  const version = await em.findOne(
+    RateBookVersion,
+    { company: companyId, status: 'published' },
+    { orderBy: { number: 'desc' }, cache: [publishedRatesCacheKey(companyId), PUBLISHED_RATES_CACHE_MS] },
+  );
   if (!version) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
   let rateBook = parsedByVersion.get(version.id);
   if (!rateBook) {

@@ -1,0 +1,31 @@
+// Serves the production build (`dist/`). It is Astro's own standalone handler behind a plain
+// node:http server, for one reason: Astro 5's Node adapter takes the client address from
+// X-Forwarded-For without any check, so anyone could pick a fresh address per request and walk
+// past every per-address rate limit. Here the header is removed unless TRUST_PROXY=true (set it only
+// behind a proxy that overwrites the header), so the address is the direct peer.
+//
+// Environment: HOST (default 127.0.0.1), PORT (default 4321), TRUST_PROXY.
+import http from 'node:http';
+
+process.env.ASTRO_NODE_AUTOSTART = 'disabled';
+const { handler } = await import('../dist/server/entry.mjs');
+
+const host = process.env.HOST || '127.0.0.1';
+const port = Number(process.env.PORT || 4321);
+const trustProxy = process.env.TRUST_PROXY === 'true';
+
+const server = http.createServer((req, res) => {
+  if (!trustProxy) delete req.headers['x-forwarded-for'];
+  handler(req, res);
+});
+server.listen(port, host, () => {
+  console.log(`Lapwing app server listening on http://${host}:${port}${trustProxy ? ' (trusting X-Forwarded-For)' : ''}`);
+});
+
+function stop() {
+  server.close(() => process.exit(0));
+  server.closeAllConnections();
+  setTimeout(() => process.exit(0), 3000).unref();
+}
+process.on('SIGTERM', stop);
+process.on('SIGINT', stop);
