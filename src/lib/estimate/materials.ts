@@ -142,33 +142,23 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
     });
   }
   if (paint) {
+    // Primer and paint are bought the same way: whole gallons for the area, coats and coverage.
+    const coating = (id: 'primer' | 'paint', c: typeof s.paint, sqFt: number): void => {
+      if (sqFt <= 0 || c.coats <= 0) return;
+      const g = gallonsFor(sqFt, c.coats, c.sqFtPerGallon);
+      lines.push({
+        id,
+        label: c.name,
+        quantity: Math.ceil(g - EPS),
+        unit: 'gallon',
+        needed: round2(g),
+        unitCents: c.priceCents,
+        basis: `${formatArea(sqFt, units)} × ${plural(c.coats, 'coat')} ÷ ${c.sqFtPerGallon} sq ft per gallon`,
+      });
+    };
     const primed = rooms.filter((r) => catalogue.treatments.find((t) => t.id === r.treatmentId)?.needsPrimer);
-    const primeSqFt = primed.reduce((acc, r) => acc + r.paintSqFt, 0);
-    if (primeSqFt > 0 && s.primer.coats > 0) {
-      const g = gallonsFor(primeSqFt, s.primer.coats, s.primer.sqFtPerGallon);
-      lines.push({
-        id: 'primer',
-        label: s.primer.name,
-        quantity: Math.ceil(g - EPS),
-        unit: 'gallon',
-        needed: round2(g),
-        unitCents: s.primer.priceCents,
-        basis: `${formatArea(primeSqFt, units)} × ${plural(s.primer.coats, 'coat')} ÷ ${s.primer.sqFtPerGallon} sq ft per gallon`,
-      });
-    }
-    const paintSqFt = sum((r) => r.paintSqFt);
-    if (paintSqFt > 0 && s.paint.coats > 0) {
-      const g = gallonsFor(paintSqFt, s.paint.coats, s.paint.sqFtPerGallon);
-      lines.push({
-        id: 'paint',
-        label: s.paint.name,
-        quantity: Math.ceil(g - EPS),
-        unit: 'gallon',
-        needed: round2(g),
-        unitCents: s.paint.priceCents,
-        basis: `${formatArea(paintSqFt, units)} × ${plural(s.paint.coats, 'coat')} ÷ ${s.paint.sqFtPerGallon} sq ft per gallon`,
-      });
-    }
+    coating('primer', s.primer, primed.reduce((acc, r) => acc + r.paintSqFt, 0));
+    coating('paint', s.paint, sum((r) => r.paintSqFt));
   }
   const extenders = sum((r) => r.cutOuts);
   if (extenders > 0) {
