@@ -44,7 +44,8 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
               {room.name}: {room.treatmentName}, {room.height === 'full' ? 'full height' : 'wainscot height'}, about{' '}
               <span className="figures">{Math.round(room.netSqFt)}</span> sq ft
             </h4>
-            <div className="mt-2 grid gap-3 sm:grid-cols-2">
+            {/* One wall per row, so dimension labels stay readable at phone and iframe widths. */}
+            <div className="mt-2 grid gap-3">
               {room.walls.map((wall, i) => (
                 <figure key={i} className="rounded-md border border-slate/20 bg-white p-2">
                   <WallDrawing wall={wall} units={estimate.units} treatmentName={room.treatmentName} />

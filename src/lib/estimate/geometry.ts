@@ -7,8 +7,9 @@ export type Interval = readonly [number, number];
 // Defaults for openings a homeowner only counts.
 // Source: TRADE.md §7 worked example — a 3'0" × 6'8" door (20 sq ft) and a 3 × 5 ft window (15 sq ft); common practice, no source.
 export const DEFAULT_DOOR = { width: 36, height: 80, sillHeight: 0 } as const;
-// Window sill at 36 in: common practice, no source.
-export const DEFAULT_WINDOW = { width: 36, height: 60, sillHeight: 36 } as const;
+// Window sill at 20 in, so its head lines up with a 6'8" door head at 80 in and stays below an
+// 8 ft ceiling: common practice, no source.
+export const DEFAULT_WINDOW = { width: 36, height: 60, sillHeight: 20 } as const;
 
 // Electrical box cut-out, a single-gang device box: about 2-1/4 × 3-3/4 in (from memory).
 export const BOX_CUTOUT = { width: 2.25, height: 3.75 } as const;

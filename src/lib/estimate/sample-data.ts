@@ -148,7 +148,7 @@ export function sampleProject(): ProjectInput {
         length: 156,
         width: 132,
         walls: [
-          { label: 'Window wall', side: 'length', openings: [{ kind: 'window', width: 36, height: 60, sillHeight: 36, offset: 60 }], outlets: 2 },
+          { label: 'Window wall', side: 'length', openings: [{ kind: 'window', width: 36, height: 56, sillHeight: 24, offset: 60 }], outlets: 2 },
           { label: 'Hall wall', side: 'width', openings: [{ kind: 'door', width: 32, height: 80, sillHeight: 0, offset: 12 }], outlets: 1, switches: 1 },
           { label: 'Sideboard wall', side: 'length', outlets: 2 },
           { label: 'Kitchen wall', side: 'width', openings: [{ kind: 'door' }], outlets: 1 },
