@@ -190,7 +190,9 @@ const projectJson = homeownerProject();
 
 const serverEntry = join(root, 'dist', 'server', 'entry.mjs');
 if (!existsSync(serverEntry)) throw new Error('dist/server/entry.mjs is missing: run through `npm run bench`, which builds.');
-const app = startChild('app', [join(root, 'scripts', 'serve.mjs')], env);
+// BENCH_SERVER_NODE_ARGS adds Node options to the app server only, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".
+const serverNodeArgs = (process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+const app = startChild('app', [...serverNodeArgs, join(root, 'scripts', 'serve.mjs')], env);
 let browser: Browser | undefined;
 let bare: ReturnType<typeof startChild> | undefined;
 let exitCode = 0;
