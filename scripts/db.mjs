@@ -4,33 +4,29 @@
 //   npm run db -- reset                                   (drop and recreate the dev database)
 // Uses the running cluster when `npm start` is up; otherwise starts it for the command.
 import { spawnSync } from 'node:child_process';
-import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { ensureNodeModules, ensurePostgres, fail, portInUse, root } from './lib/setup.mjs';
 import { clusterIsRunning, ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
-import { appEnv, startChild, stopChildren } from './lib/services.mjs';
-import { dataDir, devClusterDir } from './lib/dev-cluster.mjs';
+import { appEnv, startStandIns, stopChildren } from './lib/services.mjs';
+import { dataDir, devAppSecret, devClusterDir, devPorts } from './lib/dev-cluster.mjs';
 
 const [command, ...rest] = process.argv.slice(2);
 if (!command) fail('Usage: npm run db -- orm <mikro-orm command> | migrate | seed-demo | reset');
 
 ensureNodeModules();
 const binDir = ensurePostgres();
-const cluster = initCluster({ binDir, dir: devClusterDir(), port: Number(process.env.LAPWING_PG_PORT || 54329) });
+const ports = devPorts();
+const cluster = initCluster({ binDir, dir: devClusterDir(), port: ports.pg });
 const wasRunning = clusterIsRunning(cluster);
 if (!wasRunning) startCluster(cluster);
-const secretFile = path.join(dataDir, 'app-secret');
-const appSecret = existsSync(secretFile) ? readFileSync(secretFile, 'utf8').trim() : 'development-only-secret-not-for-production-use';
-const env = appEnv({ cluster, database: 'lapwing', s3Port: 4569, smtpPort: 2525, appPort: 4321, appSecret, mailDir: path.join(dataDir, 'mail') });
+const env = appEnv({
+  cluster, database: 'lapwing', s3Port: ports.s3, smtpPort: ports.smtp, appPort: ports.app,
+  appSecret: devAppSecret(), mailDir: path.join(dataDir, 'mail'),
+});
 
 // Seeding stores demo photos, so it needs the S3 stand-in; start the stand-ins unless `npm start` runs them.
-const s3Port = 4569;
-if (['reset', 'seed-demo'].includes(command) && !(await portInUse(s3Port))) {
-  const standIns = startChild('stand-ins', process.execPath, ['scripts/stand-ins.mjs'], {
-    env: { ...env, STANDIN_DIR: dataDir, S3_PORT: String(s3Port), SMTP_PORT: '2525', APP_ORIGIN: env.PUBLIC_ORIGIN },
-    readyLine: 'stand-ins ready',
-  });
-  await standIns.ready;
+if (['reset', 'seed-demo'].includes(command) && !(await portInUse(ports.s3))) {
+  await startStandIns({ env, dir: dataDir, s3Port: ports.s3, smtpPort: ports.smtp });
 }
 
 let status = 0;

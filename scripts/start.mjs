@@ -1,19 +1,15 @@
 // `npm start`: set up everything on a fresh machine, then serve the app with the demo data.
 // `npm run dev` does the same with Astro's dev server (hot reload) instead of the build.
-import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { ensureNodeModules, ensurePostgres, fail, log, portInUse, root } from './lib/setup.mjs';
 import { ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
-import { dataDir, devClusterDir } from './lib/dev-cluster.mjs';
-import { appEnv, buildIfNeeded, runDbTasks, startChild, stopChildren } from './lib/services.mjs';
+import { dataDir, devAppSecret, devClusterDir, devPorts } from './lib/dev-cluster.mjs';
+import { appEnv, buildIfNeeded, runDbTasks, startChild, startStandIns, stopChildren } from './lib/services.mjs';
 
 const dev = process.argv.includes('--dev');
-const appPort = Number(process.env.PORT || 4321);
 const host = process.env.HOST || '127.0.0.1';
-const pgPort = Number(process.env.LAPWING_PG_PORT || 54329);
-const s3Port = Number(process.env.LAPWING_S3_PORT || 4569);
-const smtpPort = Number(process.env.LAPWING_SMTP_PORT || 2525);
+const { app: appPort, pg: pgPort, s3: s3Port, smtp: smtpPort } = devPorts();
 
 ensureNodeModules();
 const binDir = ensurePostgres();
@@ -26,9 +22,7 @@ for (const [name, port] of [['app', appPort], ['PostgreSQL', pgPort], ['S3 stand
   if (await portInUse(port)) fail(`Port ${port} (${name}) is taken. Stop what uses it, or set PORT / LAPWING_PG_PORT / LAPWING_S3_PORT / LAPWING_SMTP_PORT.`);
 }
 
-const secretFile = path.join(dataDir, 'app-secret');
-if (!existsSync(secretFile)) writeFileSync(secretFile, randomBytes(32).toString('base64url'), { mode: 0o600 });
-const appSecret = readFileSync(secretFile, 'utf8').trim();
+const appSecret = devAppSecret();
 
 const cluster = initCluster({ binDir, dir: pgDir, port: pgPort });
 startCluster(cluster);
@@ -64,12 +58,7 @@ process.on('SIGINT', () => shutdown(0));
 process.on('SIGTERM', () => shutdown(0));
 
 try {
-  const standIns = startChild('stand-ins', process.execPath, ['scripts/stand-ins.mjs'], {
-    env: { ...env, STANDIN_DIR: dataDir, S3_PORT: String(s3Port), SMTP_PORT: String(smtpPort), APP_ORIGIN: env.PUBLIC_ORIGIN },
-    readyLine: 'stand-ins ready',
-    onExit: (code) => shutdown(code || 1),
-  });
-  await standIns.ready;
+  await startStandIns({ env, dir: dataDir, s3Port, smtpPort, onExit: (code) => shutdown(code || 1) });
 
   runDbTasks(env, ['migrate', 'seed-demo']);
 

@@ -81,6 +81,15 @@ export async function stopChildren() {
   );
 }
 
+/** Starts the S3 and SMTP stand-ins (data in `dir`) and resolves once both listen. */
+export function startStandIns({ env, dir, s3Port, smtpPort, onExit }) {
+  return startChild('stand-ins', process.execPath, ['scripts/stand-ins.mjs'], {
+    env: { ...env, STANDIN_DIR: dir, S3_PORT: String(s3Port), SMTP_PORT: String(smtpPort), APP_ORIGIN: env.PUBLIC_ORIGIN },
+    readyLine: 'stand-ins ready',
+    onExit,
+  }).ready;
+}
+
 export function runDbTasks(env, tasks) {
   const result = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), ['scripts/db.ts', ...tasks], { cwd: root, env, stdio: 'inherit' });
   if (result.status !== 0) fail(`Database tasks (${tasks.join(', ')}) failed.`);

@@ -2,6 +2,9 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Company } from '../companies/company.entity';
 import { companyBySlug } from '../companies/company.repository';
 import { verifyFormToken } from '../embed/form-token';
+import { NotFound } from '../errors';
+import { readJson } from '../http';
+import { photoFormTokenSchema, photoIdSchema } from '../../shared/photo-schemas';
 
 export type WidgetDraft = { company: Company; draftId: string };
 
@@ -14,4 +17,15 @@ export async function openWidgetDraft(em: EntityManager, slug: string, formToken
   const company = await companyBySlug(em, slug);
   const { draftId } = verifyFormToken(formToken, company.id);
   return { company, draftId };
+}
+
+/**
+ * The draft photo a widget call names: the id from the URL (a malformed one is simply not found)
+ * and the draft from the form token in the JSON body.
+ */
+export async function openDraftPhoto(em: EntityManager, slug: string, idParam: string | undefined, request: Request): Promise<WidgetDraft & { photoId: string }> {
+  const photoId = photoIdSchema.safeParse(idParam);
+  if (!photoId.success) throw new NotFound('This photo is not part of this form.');
+  const body = await readJson(request, photoFormTokenSchema);
+  return { ...(await openWidgetDraft(em, slug, body.formToken)), photoId: photoId.data };
 }
