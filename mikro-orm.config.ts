@@ -1,6 +1,6 @@
 import { defineConfig } from '@mikro-orm/postgresql';
 import { Migrator } from '@mikro-orm/migrations';
-import { entities } from './src/lib/server/db/entities';
+import { entities } from './src/lib/server/boot/entities';
 import { config } from './src/lib/server/config';
 
 /**

@@ -1,5 +1,5 @@
 /**
- * Benchmark of the Ballpark widget as a homeowner meets it: the loader's size, the embed page's
+ * Benchmark of the price widget as a homeowner meets it: the loader's size, the embed page's
  * JavaScript, its largest contentful paint on a slow phone profile, and the estimate endpoint under
  * load, side by side with a bare `node:http` server running the same estimating core.
  *

@@ -4,7 +4,7 @@
 // Tasks run in the order given.
 import { MikroORM } from '@mikro-orm/postgresql';
 import config from '../mikro-orm.config';
-import { seedDemo } from '../src/lib/server/db/seed/demo';
+import { seedDemo } from '../src/lib/server/demo-data/demo';
 
 const tasks = process.argv.slice(2);
 const orm = await MikroORM.init(config);

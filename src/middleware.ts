@@ -1,11 +1,11 @@
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { RequestContext } from '@mikro-orm/core';
-import { getOrm } from './lib/server/db/orm';
-import { startMailWorker } from './lib/server/mail/worker';
+import { getOrm } from '~/lib/server/boot/orm';
+import { startMailWorker } from '~/lib/server/mail/worker';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { csrf } from './lib/server/auth/csrf';
-import { session } from './lib/server/auth/session-middleware';
-import { staffArea } from './lib/server/auth/staff-area';
+import { csrf } from '~/lib/server/auth/csrf';
+import { session } from '~/lib/server/auth/session-middleware';
+import { staffArea } from '~/lib/server/auth/staff-area';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {

@@ -1,5 +1,5 @@
 /**
- * The Ballpark widget's loader, served as ORIGIN/widget.js. A firm pastes
+ * The price widget's loader, served as ORIGIN/widget.js. A firm pastes
  *   <script src="ORIGIN/widget.js" data-company="SLUG" async></script>
  * and this puts the widget in an iframe of ORIGIN/embed/SLUG, either inline where the script
  * stands (default) or behind a floating button (data-mode="floating"). It loads nothing until the

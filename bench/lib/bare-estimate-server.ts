@@ -9,7 +9,7 @@
  */
 import { createServer } from 'node:http';
 import { estimate, parseRateBook } from '../../src/lib/estimate/index.ts';
-import { presentForHomeowner } from '../../src/lib/server/embed/present-estimate.ts';
+import { presentForHomeowner } from '../../src/lib/server/estimates/present-estimate.ts';
 
 const rateBook = parseRateBook(JSON.parse(process.env.BENCH_RATE_BOOK ?? 'null'));
 
@@ -21,7 +21,7 @@ const server = createServer((request, response) => {
     let body: unknown;
     try {
       const { project } = JSON.parse(Buffer.concat(chunks).toString('utf8')) as { project: unknown };
-      body = { estimate: presentForHomeowner(estimate(project, rateBook, { rateBookParsed: true })) };
+      body = { estimate: presentForHomeowner(estimate(project, rateBook)) };
     } catch (error) {
       status = 400;
       body = { error: error instanceof Error ? error.message : 'bad request' };

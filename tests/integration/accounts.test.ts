@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
-import { getOrm } from '../../src/lib/server/db/orm';
+import { getOrm } from '../../src/lib/server/boot/orm';
 import { deliverDueMail } from '../../src/lib/server/mail/outbox';
 import { User } from '../../src/lib/server/users/user.entity';
 import { Membership } from '../../src/lib/server/users/membership.entity';

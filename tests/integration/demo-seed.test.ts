@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
-import { getOrm } from '../../src/lib/server/db/orm';
+import { getOrm } from '../../src/lib/server/boot/orm';
 import { Company } from '../../src/lib/server/companies/company.entity';
 import { Membership } from '../../src/lib/server/users/membership.entity';
 import { User } from '../../src/lib/server/users/user.entity';
-import { seedDemo } from '../../src/lib/server/db/seed/demo';
+import { seedDemo } from '../../src/lib/server/demo-data/demo';
 
 let orm: MikroORM;
 beforeAll(async () => {

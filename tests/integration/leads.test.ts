@@ -1,12 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
-import { getOrm } from '../../src/lib/server/db/orm';
+import { getOrm } from '../../src/lib/server/boot/orm';
 import { Company } from '../../src/lib/server/companies/company.entity';
 import { issueFormToken } from '../../src/lib/server/embed/form-token';
 import { InvalidInput } from '../../src/lib/server/errors';
 import { Lead } from '../../src/lib/server/leads/lead.entity';
-import { submitLead, type LeadRequest } from '../../src/lib/server/leads/lead.service';
+import { submitWidgetLead as submitLead } from '../../src/lib/server/embed/widget-lead';
+import type { LeadRequestParsed as LeadRequest } from '../../src/lib/shared/lead-schemas';
 import { deliverDueMail } from '../../src/lib/server/mail/outbox';
 import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
 import { createSmtpSender } from '../../src/lib/server/mail/transport';
@@ -26,6 +27,15 @@ beforeAll(async () => {
 afterAll(async () => {
   await orm.close();
 });
+
+/** The error a call was refused with (the test fails if it was not refused). */
+const refusalOf = (call: Promise<unknown>): Promise<InvalidInput> =>
+  call.then(
+    () => {
+      throw new Error('expected a refusal');
+    },
+    (error: InvalidInput) => error,
+  );
 
 /** A submission as the widget sends it, from a form opened a minute ago. */
 function submission(company: Company, overrides: Partial<LeadRequest['contact']> = {}, extra: Record<string, unknown> = {}): LeadRequest {
@@ -89,10 +99,25 @@ describe('sending a lead', () => {
     expect(await orm.em.fork().count(Lead, { company: cedar, idempotencyKey: request.idempotencyKey })).toBe(1);
   });
 
+  test('the same idempotency key with a different body is refused with 422, and the first lead stays as it was', async () => {
+    // Source: IETF draft-ietf-httpapi-idempotency-key-header, section 2.7: reusing a key with a
+    // different request payload is an error the server reports (422 Unprocessable Content).
+    const first = submission(cedar);
+    await submitLead(orm.em.fork(), cedar, first);
+    const changed = { ...first, contact: { ...first.contact, name: 'Someone Else' } };
+    const error = await refusalOf(submitLead(orm.em.fork(), cedar, changed));
+    expect(error.status).toBe(422);
+    expect(error.fields).toHaveProperty('idempotencyKey');
+    const stored = await orm.em.fork().find(Lead, { company: cedar, idempotencyKey: first.idempotencyKey });
+    expect(stored.map((lead) => lead.name)).toEqual(['Ada Greenleaf']);
+    // The very same body again is still answered with the first lead.
+    expect((await submitLead(orm.em.fork(), cedar, first)).reference).toBe(stored[0]!.reference);
+  });
+
   test('a postcode outside the service area is refused on that field, politely', async () => {
-    const error = await submitLead(orm.em.fork(), cedar, submission(cedar, { postcode: '10001' })).catch((e) => e);
+    const error = await refusalOf(submitLead(orm.em.fork(), cedar, submission(cedar, { postcode: '10001' })));
     expect(error).toBeInstanceOf(InvalidInput);
-    expect(error.fields['contact.postcode']).toMatch(/doesn't work in 10001 yet/);
+    expect(error.fields?.['contact.postcode']).toMatch(/doesn't work in 10001 yet/);
   });
 
   test('a filled-in hidden field or a form sent within seconds of opening looks accepted but stores nothing', async () => {
@@ -106,17 +131,17 @@ describe('sending a lead', () => {
   });
 
   test('a form token of one firm is refused by another', async () => {
-    const error = await submitLead(orm.em.fork(), northgate, submission(cedar)).catch((e) => e);
+    const error = await refusalOf(submitLead(orm.em.fork(), northgate, submission(cedar)));
     expect(error).toBeInstanceOf(InvalidInput);
-    expect(Object.keys(error.fields)).toEqual(['formToken']);
+    expect(Object.keys(error.fields ?? {})).toEqual(['formToken']);
   });
 
   test('a treatment the firm does not offer is refused with a field path', async () => {
     const request = submission(northgate);
     request.project.rooms[0]!.treatment.id = 'picture-frame';
     request.contact.postcode = '02134';
-    const error = await submitLead(orm.em.fork(), northgate, request).catch((e) => e);
+    const error = await refusalOf(submitLead(orm.em.fork(), northgate, request));
     expect(error).toBeInstanceOf(InvalidInput);
-    expect(Object.keys(error.fields)[0]).toMatch(/^project\.rooms\.0\.treatment/);
+    expect(Object.keys(error.fields ?? {})[0]).toMatch(/^project\.rooms\.0\.treatment/);
   });
 });

@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
-import { getOrm } from '../../src/lib/server/db/orm';
+import { getOrm } from '../../src/lib/server/boot/orm';
 import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
 import { deliverDueMail, enqueueMail, retryDelayMs } from '../../src/lib/server/mail/outbox';
 import { createSmtpSender } from '../../src/lib/server/mail/transport';

@@ -10,7 +10,7 @@ import type { MikroORM } from '@mikro-orm/postgresql';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import AxeBuilder from '@axe-core/playwright';
 import sharp from 'sharp';
-import { getOrm } from '../../src/lib/server/db/orm';
+import { getOrm } from '../../src/lib/server/boot/orm';
 import { Company } from '../../src/lib/server/companies/company.entity';
 import { issueFormToken } from '../../src/lib/server/embed/form-token';
 import { LeadPhoto } from '../../src/lib/server/photos/lead-photo.entity';

@@ -7,11 +7,9 @@ import { randomBytes, randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import sharp from 'sharp';
-import { getOrm } from '../../src/lib/server/db/orm';
+import { getOrm } from '../../src/lib/server/boot/orm';
 import { Company } from '../../src/lib/server/companies/company.entity';
 import { issueFormToken } from '../../src/lib/server/embed/form-token';
-import { Lead } from '../../src/lib/server/leads/lead.entity';
-import { RateBookVersion } from '../../src/lib/server/rates/rate-book-version.entity';
 import { LeadPhoto } from '../../src/lib/server/photos/lead-photo.entity';
 import { attachDraftPhotos, photoLinks, photosOfLead } from '../../src/lib/server/photos/lead-photo.service';
 import { getObjectBuffer, headObject } from '../../src/lib/server/storage/s3';
@@ -19,6 +17,7 @@ import { POST as requestPhoto } from '../../src/pages/api/embed/[slug]/photos/in
 import { POST as completePhoto } from '../../src/pages/api/embed/[slug]/photos/[id]/complete';
 import { DELETE as deletePhoto } from '../../src/pages/api/embed/[slug]/photos/[id]/index';
 import { callRoute } from '../helpers/api-route';
+import { buildLead } from '../helpers/factories';
 import { uploadLikeABrowser } from '../helpers/browser-upload';
 import {
   containsOurGpsSeconds,
@@ -371,13 +370,7 @@ describe('sending the lead and staff links', () => {
   /** Creates a lead the way the lead service does, inside a transaction, and attaches the draft's photos. */
   async function sendLead(companyId: string, draftId: string) {
     return orm.em.fork().transactional(async (tx) => {
-      const rates = tx.create(RateBookVersion, { company: companyId, number: Math.floor(Math.random() * 1e9), data: {} as never });
-      const lead = tx.create(Lead, {
-        company: companyId, reference: randomBytes(5).toString('hex').toUpperCase(), name: 'Test Homeowner', email: 'home@example.test',
-        phone: '+15125550147', address: '1 Test Lane', postcode: '78704', preferredContact: 'email', consentAt: new Date(),
-        inputs: {}, estimate: {}, rateBookVersion: rates, rangeLowCents: 100_000, rangeHighCents: 150_000,
-        idempotencyKey: randomBytes(12).toString('hex'), draftId, viewTokenHash: randomBytes(32).toString('hex'),
-      });
+      const lead = buildLead(tx, companyId, { draftId });
       const attached = await attachDraftPhotos(tx, { companyId, draftId, lead });
       await tx.flush();
       return { lead, attached };

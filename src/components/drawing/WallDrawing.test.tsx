@@ -1,10 +1,10 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
-import { estimate, parseRateBook, sampleProject, sampleRateBook } from '../../lib/estimate/index.ts';
+import { estimate, parseRateBook, sampleProject, sampleRateBook } from '~/lib/estimate/index.ts';
 import { WallDrawing } from './WallDrawing.tsx';
 
 const rateBook = parseRateBook(sampleRateBook());
-const e = estimate(sampleProject(), rateBook, { rateBookParsed: true });
+const e = estimate(sampleProject(), rateBook);
 
 describe('WallDrawing', () => {
   it('draws a shiplap wall to scale with its boards, boxes and dimensions', () => {
@@ -36,7 +36,7 @@ describe('WallDrawing', () => {
   it('shows the ripped last board', () => {
     const project = sampleProject();
     project.rooms[1]!.walls[0]!.length = 146;
-    const wall = estimate(project, rateBook, { rateBookParsed: true }).takeoff.rooms[1]!.walls[0]!;
+    const wall = estimate(project, rateBook).takeoff.rooms[1]!.walls[0]!;
     const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" />);
     expect(wall.boards!.lastWidth).toBeLessThan(wall.boards!.boardWidth);
     expect(html).toContain('class="ripped"');

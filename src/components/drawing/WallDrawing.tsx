@@ -6,9 +6,9 @@
  */
 import { useId } from 'react';
 // Direct module imports keep the browser bundle free of the core's schemas (and zod).
-import type { WallPiece, WallTakeoff } from '../../lib/estimate/types.ts';
-import { wallSummary } from '../../lib/estimate/summary.ts';
-import { formatLength, type Units } from '../../lib/estimate/units.ts';
+import type { WallPiece, WallTakeoff } from '~/lib/estimate/types.ts';
+import { wallSummary } from '~/lib/estimate/summary.ts';
+import { formatLength, type Units } from '~/lib/estimate/units.ts';
 
 export interface WallDrawingProps {
   wall: WallTakeoff;

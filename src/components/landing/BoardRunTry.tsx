@@ -1,7 +1,7 @@
 import { useState } from 'react';
-import { LengthField } from '../forms/LengthField';
-import { boardRun } from '../../lib/estimate/board-run';
-import { formatLength, parseLength } from '../../lib/estimate/units';
+import { LengthField } from '~/components/forms/LengthField';
+import { boardRun } from '~/lib/estimate/board-run';
+import { formatLength, parseLength } from '~/lib/estimate/units';
 
 type Parsed = { ok: true; inches: number } | { ok: false; message: string };
 

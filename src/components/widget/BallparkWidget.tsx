@@ -1,7 +1,7 @@
 import { Suspense, lazy, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
-import type { Units } from '../../lib/estimate/index.ts';
-import type { ContactInput } from '../../lib/shared/lead-schemas';
+import type { Units } from '~/lib/estimate/index.ts';
+import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
 import { newDraft, normaliseServerErrors, toProject, type Draft } from './draft';
 import { OptionsStep } from './OptionsStep';

@@ -2,7 +2,7 @@ import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { contactSchema, type ContactInput } from '../../lib/shared/lead-schemas';
+import { contactSchema, type ContactInput } from '~/lib/shared/lead-schemas';
 
 type Props = {
   firmName: string;

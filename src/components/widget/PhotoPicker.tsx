@@ -1,9 +1,9 @@
 import { useCallback, useEffect, useId, useRef, useState } from 'react';
 import { useDropzone, type FileRejection } from 'react-dropzone';
-import { ACCEPTED_PHOTO_TYPES, MAX_PHOTO_BYTES, MAX_PHOTOS, PHOTO_MESSAGES } from '../../lib/shared/photo-schemas';
-import { completeUpload, OFFLINE_MESSAGE, removeUpload, requestUpload } from './photos/photo-api';
-import { shrinkPhoto } from './photos/shrink-photo';
-import { uploadWithProgress } from './photos/upload-with-progress';
+import { ACCEPTED_PHOTO_TYPES, MAX_PHOTO_BYTES, MAX_PHOTOS, PHOTO_MESSAGES } from '~/lib/shared/photo-schemas';
+import { completeUpload, OFFLINE_MESSAGE, removeUpload, requestUpload } from '~/components/widget/photos/photo-api';
+import { shrinkPhoto } from '~/components/widget/photos/shrink-photo';
+import { uploadWithProgress } from '~/components/widget/photos/upload-with-progress';
 
 export type PickedPhoto = { id: string; thumbnailUrl: string };
 

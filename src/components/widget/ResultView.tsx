@@ -1,6 +1,6 @@
-import { WallDrawing } from '../drawing/WallDrawing';
-import { formatMoney } from '../../lib/estimate/money.ts';
-import type { HomeownerEstimate } from '../../lib/shared/homeowner-estimate';
+import { WallDrawing } from '~/components/drawing/WallDrawing';
+import { formatMoney } from '~/lib/estimate/money.ts';
+import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
 
 /** The ballpark: the range, how it adds up, a drawing of every wall, and what to know. */
 export function ResultView({ estimate, firmName, updating }: { estimate: HomeownerEstimate; firmName: string; updating: boolean }) {

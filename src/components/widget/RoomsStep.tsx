@@ -1,7 +1,7 @@
 import { useId } from 'react';
-import type { Units } from '../../lib/estimate/index.ts';
+import type { Units } from '~/lib/estimate/index.ts';
 import { Counter } from './Counter';
-import { LengthField } from '../forms/LengthField';
+import { LengthField } from '~/components/forms/LengthField';
 import { newKey, newRoom, type FieldErrors, type RoomDraft } from './draft';
 
 const ROOM_NAMES = ['Living room', 'Dining room', 'Bedroom', 'Hallway', 'Entry', 'Bathroom', 'Kitchen', 'Office', 'Stairway', 'Laundry'];

@@ -1,4 +1,4 @@
-import { LengthField } from '../forms/LengthField';
+import { LengthField } from '~/components/forms/LengthField';
 import { TreatmentIcon } from './TreatmentIcon';
 import type { Draft, FieldErrors } from './draft';
 

@@ -1,6 +1,6 @@
-import type { ProjectInput } from '../../lib/estimate/index.ts';
-import type { HomeownerEstimate } from '../../lib/shared/homeowner-estimate';
-import type { ContactInput } from '../../lib/shared/lead-schemas';
+import type { ProjectInput } from '~/lib/estimate/index.ts';
+import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
+import type { ContactInput } from '~/lib/shared/lead-schemas';
 
 export class ApiError extends Error {
   constructor(

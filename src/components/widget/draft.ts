@@ -2,8 +2,8 @@
  * The widget's form state ("draft") and its translation into the estimating core's project input.
  * Lengths stay as the homeowner typed them (tape style) until they are parsed here.
  */
-import type { ProjectInput } from '../../lib/estimate/schemas.ts';
-import { parseLength, type Units } from '../../lib/estimate/units.ts';
+import type { ProjectInput } from '~/lib/estimate/schemas.ts';
+import { parseLength, type Units } from '~/lib/estimate/units.ts';
 
 export type SizeMode = 'room' | 'walls';
 

@@ -81,13 +81,13 @@ describe('estimate of the sample project (invented demo data)', () => {
 });
 
 describe('cautions', () => {
-  const ids = (p: ProjectInput): string[] => estimate(p, rateBook, { rateBookParsed: true }).takeoff.cautions.map((c) => c.id);
+  const ids = (p: ProjectInput): string[] => estimate(p, rateBook).takeoff.cautions.map((c) => c.id);
 
   // Source: NEC 314.20 via TRADE.md §4 — a combustible (wood) finish needs boxes flush: any box under the finish → extender.
   it('asks for box extenders and the breaker when boxes sit under a wood finish', () => {
     expect(ids(oneWall(120, 'shiplap-vertical-ply', 'wainscot'))).toContain('electrical-boxes');
     expect(ids(oneWall(120, 'shiplap-vertical-ply', 'wainscot', {}, 0))).not.toContain('electrical-boxes');
-    const c = estimate(oneWall(120, 'beadboard', 'wainscot'), rateBook, { rateBookParsed: true }).takeoff.cautions.find((x) => x.id === 'electrical-boxes')!;
+    const c = estimate(oneWall(120, 'beadboard', 'wainscot'), rateBook).takeoff.cautions.find((x) => x.id === 'electrical-boxes')!;
     expect(c.text).toMatch(/breaker/);
     expect(c.text).toMatch(/licensed electrician/);
   });
@@ -102,10 +102,10 @@ describe('cautions', () => {
   // Source: TRADE.md §5 — removing 60 ft of 5.5 in painted baseboard disturbs 27.5 sq ft (> 6 sq ft) → RRP applies; 12 ft → 5.5 sq ft (minor repair).
   it('charges lead-safe set-up when removed painted baseboard passes 6 sq ft in a room', () => {
     const p = (len: number): ProjectInput => ({ ...oneWall(len, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }), rooms: [{ ...oneWall(len, 'beadboard', 'wainscot').rooms[0]!, replaceBaseboard: true, walls: [{ length: len }] }] });
-    const big = estimate(p(60 * 12), rateBook, { rateBookParsed: true });
+    const big = estimate(p(60 * 12), rateBook);
     expect(big.takeoff.rooms[0]!.disturbedPaintSqFt).toBeCloseTo((720 * 5.25) / 144, 9);
     expect(big.price.lines.some((l) => l.label === 'Lead-safe set-up')).toBe(true);
-    const small = estimate(p(12 * 12), rateBook, { rateBookParsed: true });
+    const small = estimate(p(12 * 12), rateBook);
     expect(small.takeoff.rooms[0]!.disturbedPaintSqFt).toBeLessThanOrEqual(6);
     expect(small.price.lines.some((l) => l.label === 'Lead-safe set-up')).toBe(false);
   });
@@ -122,7 +122,7 @@ describe('cautions', () => {
   it('every caution defers to codes or licensed professionals', () => {
     const p = oneWall(120, 'shiplap-vertical-ply', 'full', { builtBefore1978: 'yes' });
     p.rooms[0]!.damp = true;
-    for (const c of estimate(p, rateBook, { rateBookParsed: true }).takeoff.cautions) {
+    for (const c of estimate(p, rateBook).takeoff.cautions) {
       expect(c.text).toMatch(/code|licensed|rules|certified/i);
     }
   });
@@ -132,23 +132,23 @@ describe('bad input is refused with the field named', () => {
   it('refuses negative and absurd lengths', () => {
     const p = oneWall(120, 'beadboard', 'wainscot') as any;
     p.rooms[0].walls[0].length = -5;
-    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))).toEqual({ 'rooms.0.walls.0.length': 'Wall length must be at least 12 in.' });
+    expect(fieldsOf(() => estimate(p, rateBook))).toEqual({ 'rooms.0.walls.0.length': 'Wall length must be at least 12 in.' });
     p.rooms[0].walls[0].length = 1e9;
-    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))['rooms.0.walls.0.length']).toMatch(/at most 1200 in/);
+    expect(fieldsOf(() => estimate(p, rateBook))['rooms.0.walls.0.length']).toMatch(/at most 1200 in/);
     p.rooms[0].walls[0].length = Number.NaN;
-    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))['rooms.0.walls.0.length']).toMatch(/Wall length/);
+    expect(fieldsOf(() => estimate(p, rateBook))['rooms.0.walls.0.length']).toMatch(/Wall length/);
   });
 
   it('refuses an opening bigger than its wall or taller than the ceiling', () => {
     const p = oneWall(120, 'beadboard', 'wainscot') as any;
     p.rooms[0].walls[0].openings[0] = { kind: 'door', width: 130, height: 100, sillHeight: 0 };
-    const f = fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }));
+    const f = fieldsOf(() => estimate(p, rateBook));
     expect(f['rooms.0.walls.0.openings.0.width']).toMatch(/more than the wall is long/);
     expect(f['rooms.0.walls.0.openings.0.height']).toMatch(/above the ceiling/);
   });
 
   it('refuses an unknown or switched-off treatment', () => {
-    expect(fieldsOf(() => estimate(oneWall(120, 'marble-slab', 'wainscot'), rateBook, { rateBookParsed: true }))['rooms.0.treatment.id']).toMatch(/Unknown treatment "marble-slab"/);
+    expect(fieldsOf(() => estimate(oneWall(120, 'marble-slab', 'wainscot'), rateBook))['rooms.0.treatment.id']).toMatch(/Unknown treatment "marble-slab"/);
     const rb = sampleRateBook();
     rb.catalogue.treatments[3]!.enabled = false;
     expect(fieldsOf(() => estimate(oneWall(120, 'beadboard', 'wainscot'), rb))['rooms.0.treatment.id']).toMatch(/does not offer/);
@@ -156,8 +156,8 @@ describe('bad input is refused with the field named', () => {
 
   it('refuses unknown keys, unknown trip zones and a broken rate book', () => {
     const p = { ...oneWall(120, 'beadboard', 'wainscot'), colour: 'red' };
-    expect(fieldsOf(() => estimate(p, rateBook, { rateBookParsed: true }))).toHaveProperty('colour');
-    expect(fieldsOf(() => estimate({ ...oneWall(120, 'beadboard', 'wainscot'), tripZone: 'mars' }, rateBook, { rateBookParsed: true }))).toHaveProperty('tripZone');
+    expect(fieldsOf(() => estimate(p, rateBook))).toHaveProperty('colour');
+    expect(fieldsOf(() => estimate({ ...oneWall(120, 'beadboard', 'wainscot'), tripZone: 'mars' }, rateBook))).toHaveProperty('tripZone');
     const rb = sampleRateBook() as any;
     rb.catalogue.capRailId = 'nothing';
     rb.labour.rateCents = -1;
@@ -189,8 +189,8 @@ describe('properties of the price', () => {
   // Property (common practice, no source): more wall never costs less.
   fcTest.prop([arb], { numRuns: 150 })('more wall never costs less', (c) => {
     const extra = { paint: c.paint, measuredBy: c.measuredBy, photoCount: c.photos };
-    const a = estimate(oneWall(c.length, c.treatment, c.height, extra, c.outlets), rateBook, { rateBookParsed: true }).price;
-    const b = estimate(oneWall(c.length + c.more, c.treatment, c.height, extra, c.outlets), rateBook, { rateBookParsed: true }).price;
+    const a = estimate(oneWall(c.length, c.treatment, c.height, extra, c.outlets), rateBook).price;
+    const b = estimate(oneWall(c.length + c.more, c.treatment, c.height, extra, c.outlets), rateBook).price;
     expect(b.totalCents).toBeGreaterThanOrEqual(a.totalCents);
     expect(b.lowCents).toBeGreaterThanOrEqual(a.lowCents);
     expect(b.highCents).toBeGreaterThanOrEqual(a.highCents);
@@ -200,7 +200,7 @@ describe('properties of the price', () => {
     'low ≤ high, and the minimum job holds',
     (c, minimum, rounding) => {
       const rb = { ...rateBook, minimumJobCents: minimum, roundingCents: rounding };
-      const p = estimate(oneWall(c.length, c.treatment, c.height, { paint: c.paint, measuredBy: c.measuredBy, photoCount: c.photos }, c.outlets), rb, { rateBookParsed: true }).price;
+      const p = estimate(oneWall(c.length, c.treatment, c.height, { paint: c.paint, measuredBy: c.measuredBy, photoCount: c.photos }, c.outlets), rb).price;
       expect(p.lowCents).toBeLessThanOrEqual(p.highCents);
       expect(p.lowCents).toBeGreaterThanOrEqual(minimum);
       expect(p.totalCents).toBeGreaterThanOrEqual(minimum);

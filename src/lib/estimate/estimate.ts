@@ -1,18 +1,25 @@
 import { priceRange } from './pricing.ts';
-import type { RateBook } from './schemas.ts';
+import type { Project, RateBook } from './schemas.ts';
 import { takeoffOf } from './takeoff.ts';
 import type { Estimate } from './types.ts';
-import { parseRateBook, validateProject } from './validate.ts';
+import { checkProject, parseRateBook, validateProject } from './validate.ts';
 
 /**
- * The whole estimate: validates the project against the rate book (throws EstimateInputError with
- * field paths), takes off every wall and room, prices it and gives the range. `rateBook` may be
- * raw input (it is then parsed; errors are under `rateBook.`) or an already parsed RateBook.
- * Returns plain JSON-serialisable data.
+ * The whole estimate from raw input: parses the rate book (errors under `rateBook.`), validates the
+ * project against it (throws EstimateInputError with field paths), takes off every wall and room,
+ * prices it and gives the range. Returns plain JSON-serialisable data.
  */
-export function estimate(project: unknown, rateBook: unknown, opts: { rateBookParsed?: boolean } = {}): Estimate {
-  const rb = opts.rateBookParsed ? (rateBook as RateBook) : parseRateBook(rateBook);
-  const p = validateProject(project, rb.catalogue, rb.extras.tripZones);
-  const takeoff = takeoffOf(p, rb.catalogue, rb.units);
-  return { takeoff, price: priceRange(takeoff, rb) };
+export function estimate(project: unknown, rateBook: unknown): Estimate {
+  const rates = parseRateBook(rateBook);
+  return estimateParsed(validateProject(project, rates.catalogue, rates.extras.tripZones), rates);
+}
+
+/**
+ * The same for input that is already parsed: a project that passed `projectSchema` and a rate book
+ * that passed `parseRateBook`. Only the checks that need the rate book run again.
+ */
+export function estimateParsed(project: Project, rates: RateBook): Estimate {
+  const checked = checkProject(project, rates.catalogue, rates.extras.tripZones);
+  const takeoff = takeoffOf(checked, rates.catalogue, rates.units);
+  return { takeoff, price: priceRange(takeoff, rates) };
 }

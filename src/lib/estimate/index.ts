@@ -40,10 +40,10 @@ export type {
   MouldingStock,
   MeasuredBy,
 } from './schemas.ts';
-export { validateProject, parseRateBook } from './validate.ts';
+export { validateProject, checkProject, parseRateBook } from './validate.ts';
 export { takeoff, coversWall } from './takeoff.ts';
 export { priceRange } from './pricing.ts';
-export { estimate } from './estimate.ts';
+export { estimate, estimateParsed } from './estimate.ts';
 export { wallSummary } from './summary.ts';
 export { sampleRateBook, sampleProject } from './sample-data.ts';
 export type * from './types.ts';

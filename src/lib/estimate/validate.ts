@@ -12,7 +12,14 @@ const fmt = (x: number): string => `${Math.round(x * 100) / 100} in`;
 export function validateProject(input: unknown, catalogue: Catalogue, tripZones?: Array<{ id: string }>): Project {
   const parsed = projectSchema.safeParse(input);
   if (!parsed.success) throw new EstimateInputError(fieldsFromZod(parsed.error));
-  const project = parsed.data;
+  return checkProject(parsed.data, catalogue, tripZones);
+}
+
+/**
+ * The checks of `validateProject` that need the rate book or the wall's own numbers, for a project
+ * that has already passed `projectSchema` (an API body parsed once by its request schema).
+ */
+export function checkProject(project: Project, catalogue: Catalogue, tripZones?: Array<{ id: string }>): Project {
   const fields: Record<string, string> = {};
   const bad = (path: string, message: string): void => {
     if (!(path in fields)) fields[path] = message;

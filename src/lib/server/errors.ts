@@ -47,6 +47,13 @@ export class Conflict extends AppError {
   }
 }
 
+/** Well-formed but refused as it stands, e.g. an idempotency key reused with a different body. */
+export class UnprocessableContent extends AppError {
+  constructor(message: string, fields?: Record<string, string>) {
+    super(message, 422, fields);
+  }
+}
+
 export class UnsupportedMediaType extends AppError {
   constructor(message = 'Send JSON (Content-Type: application/json).') {
     super(message, 415);

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { fieldsFromZod } from '../estimate/errors.ts';
+import { fieldsFromZod } from '~/lib/estimate/errors.ts';
 import { InvalidInput, UnsupportedMediaType } from './errors';
 
 /** Largest JSON body an endpoint reads; bigger bodies are refused before parsing. */

@@ -3,14 +3,7 @@
  * the endpoints so the message next to a field is the one the server would give.
  */
 import { z } from 'zod';
-
-export const STAFF_ROLES = ['owner', 'sales'] as const;
-export type StaffRole = (typeof STAFF_ROLES)[number];
-
-export const ROLE_LABELS: Record<StaffRole, string> = {
-  owner: 'Owner — everything, including Rate book, Setup and the team',
-  sales: 'Sales — Desk and Visits',
-};
+import { STAFF_ROLES } from './labels';
 
 /** Source: OWASP ASVS 4.0.3 2.1.1 (at least 12 characters) and 2.1.2 (at most 128). */
 export const PASSWORD_MIN = 12;

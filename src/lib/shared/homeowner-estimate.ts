@@ -1,4 +1,4 @@
-import type { Caution, WallTakeoff } from '../estimate/index.ts';
+import type { Caution, WallTakeoff } from '~/lib/estimate/index.ts';
 
 /**
  * What a homeowner sees of an estimate. The firm's unit rates (price per sheet, labour rate, markup)

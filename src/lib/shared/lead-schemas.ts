@@ -1,13 +1,11 @@
 /**
- * Inputs of the Ballpark widget's public API, shared by the form (react-hook-form resolver) and the
+ * Inputs of the price widget's public API, shared by the form (react-hook-form resolver) and the
  * endpoints, so a message the homeowner sees is the message the server would give.
  */
 import { z } from 'zod';
 import { parsePhoneNumberFromString } from 'libphonenumber-js/min';
-import { projectSchema } from '../estimate/schemas.ts';
-
-export const CONTACT_METHODS = ['phone', 'email', 'text'] as const;
-export type ContactMethod = (typeof CONTACT_METHODS)[number];
+import { projectSchema } from '~/lib/estimate/schemas.ts';
+import { CONTACT_METHODS } from './labels';
 
 /** Phone numbers are read as US numbers unless they start with +; stored as E.164. */
 export const DEFAULT_PHONE_COUNTRY = 'US';
@@ -57,6 +55,7 @@ export const contactSchema = z.strictObject({
 });
 
 export type ContactInput = z.input<typeof contactSchema>;
+export type Contact = z.output<typeof contactSchema>;
 
 /** Body of POST /api/embed/SLUG/estimate. */
 export const estimateRequestSchema = z.strictObject({
@@ -78,3 +77,4 @@ export const leadRequestSchema = z.strictObject({
 });
 
 export type LeadRequest = z.input<typeof leadRequestSchema>;
+export type LeadRequestParsed = z.output<typeof leadRequestSchema>;

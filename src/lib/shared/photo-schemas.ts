@@ -48,8 +48,6 @@ export type PhotoUploadRequest = z.input<typeof photoUploadRequestSchema>;
 /** Body of POST …/photos/ID/complete and DELETE …/photos/ID. */
 export const photoFormTokenSchema = z.strictObject({ formToken });
 
-/** The photo id in a URL; anything that is not a UUID is simply not found. */
-export const photoIdSchema = z.uuid();
 
 /**
  * A file name fit for display: no folders, no control characters, at most 120 characters

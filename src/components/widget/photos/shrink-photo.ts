@@ -3,7 +3,7 @@
  * becomes a JPEG of a few hundred kilobytes, which matters on a slow mobile uplink. Drawing it
  * anew also leaves its EXIF (including the GPS position) behind on the phone.
  */
-import { PHOTO_LONG_EDGE_PX } from '../../../lib/shared/photo-schemas';
+import { PHOTO_LONG_EDGE_PX } from '~/lib/shared/photo-schemas';
 import { fitLongEdge } from './fit-long-edge';
 
 /** JPEG quality for the shrunk copy: visually clean for wall photos (common practice, no source). */

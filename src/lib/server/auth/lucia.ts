@@ -1,12 +1,12 @@
 import { Lucia, TimeSpan } from 'lucia';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { config } from '../config';
-import { getOrm } from '../db/orm';
+import { currentOrm } from '../db/orm-provider';
 import { MikroOrmSessionAdapter, type SessionAttributes, type UserAttributes } from './mikro-orm-adapter';
 
 /**
  * How long a session lives without use; each use in the second half of this window extends it.
- * Staff work the Desk most days, so a week keeps them signed in across a weekend.
+ * Staff work in Inquiries most days, so a week keeps them signed in across a weekend.
  * common practice, no source.
  */
 export const SESSION_IDLE_LIFETIME = new TimeSpan(7, 'd');
@@ -46,7 +46,7 @@ let lucia: AppLucia | undefined;
 
 /** The process-wide Lucia, over forks of the app's ORM. */
 export function getLucia(): AppLucia {
-  lucia ??= createLucia(async () => (await getOrm()).em.fork());
+  lucia ??= createLucia(async () => (await currentOrm()).em.fork());
   return lucia;
 }
 

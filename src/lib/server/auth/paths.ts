@@ -1,4 +1,4 @@
-/** Routes of the public Ballpark widget: no session, no staff CSRF rule (they have their own CORS rules). */
+/** Routes of the public Price widget: no session, no staff CSRF rule (they have their own CORS rules). */
 export function isPublicWidgetPath(pathname: string): boolean {
   return /^\/(embed|demo|api\/embed)(\/|$)/.test(pathname) || pathname === '/widget.js';
 }

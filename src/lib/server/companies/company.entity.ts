@@ -1,9 +1,10 @@
 import { Entity, Property, Unique, type Opt } from '@mikro-orm/core';
 import { BaseEntity } from '../db/base.entity';
 
-export type Units = 'imperial' | 'metric';
-
-/** A contractor firm: the tenant. Everything a firm owns points back here. */
+/**
+ * A contractor firm: the tenant. Everything a firm owns points back here. Units, currency and number
+ * formatting belong to the firm's published Rate book, which prices every estimate.
+ */
 @Entity({ tableName: 'company' })
 export class Company extends BaseEntity {
   /** The firm's short name in URLs (`/embed/cedar-hollow`). */
@@ -18,19 +19,7 @@ export class Company extends BaseEntity {
   @Property({ type: 'string', length: 64 })
   timeZone: string & Opt = 'America/New_York';
 
-  /** ISO 4217 currency code; money is stored in integer minor units (cents). */
-  @Property({ type: 'string', length: 3 })
-  currency: string & Opt = 'USD';
-
-  /** Lengths shown and typed in inches and feet, or in millimetres and metres. */
-  @Property({ type: 'string', length: 8 })
-  units: Units & Opt = 'imperial';
-
-  /** BCP 47 locale for number and money formatting. */
-  @Property({ type: 'string', length: 16 })
-  locale: string & Opt = 'en-US';
-
-  /** Sites allowed to embed the Ballpark widget and call its API (origins like https://firm.example). */
+  /** Sites allowed to embed the price widget and call its API (origins like https://firm.example). */
   @Property({ type: 'json', defaultRaw: `'[]'` })
   embedOrigins: string[] & Opt = [];
 

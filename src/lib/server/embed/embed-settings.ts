@@ -1,6 +1,6 @@
 import type { Company } from '../companies/company.entity';
 import { config } from '../config';
-import type { RateBook } from '../../estimate';
+import type { RateBook } from '~/lib/estimate';
 
 /** `frame-ancestors` for the embed page: our own pages (the demo) and the firm's allowed sites only. */
 export function frameAncestors(company: Company): string {

@@ -1,5 +1,5 @@
 import { Entity, Index, Property, Unique } from '@mikro-orm/core';
-import { TenantEntity } from '../db/base.entity';
+import { TenantEntity } from '../companies/tenant.entity';
 
 export const FUNNEL_STEPS = ['widget-opened', 'first-estimate', 'lead-sent'] as const;
 export type FunnelStep = (typeof FUNNEL_STEPS)[number];

@@ -7,7 +7,12 @@ import { limiter, type LimiterOptions } from '../rate-limit';
 import { corsHeaders, isForeignOrigin } from './cors';
 
 export type PublicCall = { em: EntityManager; company: Company; request: Request; params: APIContext['params'] };
-export type Limits = { perAddress: LimiterOptions; perFirm: LimiterOptions };
+export type Limits = {
+  perAddress: LimiterOptions;
+  perFirm: LimiterOptions;
+  /** What a refused caller reads; the defaults suit any widget call. */
+  messages?: { perAddress?: string; perFirm?: string };
+};
 
 /**
  * Glue shared by the widget's public endpoints: finds the firm by slug, refuses origins the firm has
@@ -23,8 +28,8 @@ export function publicEndpoint(name: string, limits: Limits, handler: (call: Pub
       const company = await companyBySlug(context.locals.em, context.params.slug ?? '');
       cors = corsHeaders(context.request, company);
       if (isForeignOrigin(context.request, company)) throw new AppError('This site is not allowed to use the estimate form.', 403);
-      await perAddress.consume(`${company.id}:${context.clientAddress}`, 'Too many requests from your network. Please wait a minute and try again.');
-      await perFirm.consume(company.id, 'This form is very busy right now. Please try again in a few minutes.');
+      await perAddress.consume(`${company.id}:${context.clientAddress}`, limits.messages?.perAddress ?? 'Too many requests from your network. Please wait a minute and try again.');
+      await perFirm.consume(company.id, limits.messages?.perFirm ?? 'This form is very busy right now. Please try again in a few minutes.');
       const { status, body } = await handler({ em: context.locals.em, company, request: context.request, params: context.params });
       return body === undefined ? new Response(null, { status, headers: cors }) : Response.json(body, { status, headers: cors });
     } catch (error) {

@@ -1,6 +1,6 @@
 import type { Company } from '../companies/company.entity';
-import type { HomeownerEstimate } from '../embed/present-estimate';
-import { formatMoney } from '../../estimate';
+import type { HomeownerEstimate } from '../estimates/present-estimate';
+import { formatMoney } from '~/lib/estimate';
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 /** Everything a homeowner typed is escaped before it goes into HTML mail. */

@@ -1,8 +1,9 @@
 import { Entity, Index, ManyToOne, Property, Unique, type Opt } from '@mikro-orm/core';
-import { TenantEntity } from '../db/base.entity';
+import { TenantEntity } from '../companies/tenant.entity';
+import type { Estimate, ProjectInput } from '~/lib/estimate';
+import type { Envelope } from '../db/versioned-json';
 import type { RateBookVersion } from '../rates/rate-book-version.entity';
-import type { LeadStage } from './stages';
-import type { ContactMethod } from '../../shared/lead-schemas';
+import type { ContactMethod, LeadSource, LeadStage } from '~/lib/shared/labels';
 
 /** A homeowner's inquiry: their inputs, the estimate they saw, how to reach them, where it stands. */
 @Entity({ tableName: 'lead' })
@@ -17,9 +18,9 @@ export class Lead extends TenantEntity {
   @Property({ type: 'string', length: 24 })
   stage: LeadStage & Opt = 'new';
 
-  /** Where it came from: the Ballpark widget, or entered on the Desk. */
+  /** Where it came from: the price widget, or typed in by staff. */
   @Property({ type: 'string', length: 12 })
-  source: ('widget' | 'desk') & Opt = 'widget';
+  source: LeadSource & Opt = 'widget';
 
   @Property({ type: 'string', length: 120 })
   name!: string;
@@ -47,13 +48,16 @@ export class Lead extends TenantEntity {
   @Property({ type: 'datetime' })
   consentAt!: Date;
 
-  /** The project exactly as the homeowner described it. */
+  /** The project exactly as the homeowner described it; read it with `leadInputs.read`. */
   @Property({ type: 'json' })
-  inputs!: Record<string, unknown>;
+  inputs!: Envelope<ProjectInput>;
 
-  /** The estimate as shown to the homeowner (takeoff, price lines, range, cautions). */
-  @Property({ type: 'json' })
-  estimate!: Record<string, unknown>;
+  /**
+   * The estimate as shown to the homeowner (takeoff, price lines, range, cautions); read it with
+   * `estimateSnapshot.read`. Lazy: lists of leads never load it.
+   */
+  @Property({ type: 'json', lazy: true })
+  estimate!: Envelope<Estimate>;
 
   @ManyToOne({ entity: 'RateBookVersion', deleteRule: 'restrict' })
   rateBookVersion!: RateBookVersion;
@@ -67,6 +71,13 @@ export class Lead extends TenantEntity {
   /** The client's key for this submission: a retried or double-tapped send makes one lead. */
   @Property({ type: 'string', length: 64 })
   idempotencyKey!: string;
+
+  /**
+   * SHA-256 of what was sent with that key, so the same key with a different body is refused
+   * rather than silently answered with the first lead. Null for leads entered by staff.
+   */
+  @Property({ type: 'string', length: 64, nullable: true })
+  requestDigest: string | null = null;
 
   /** The widget session the photos were uploaded under. */
   @Property({ type: 'uuid', nullable: true })

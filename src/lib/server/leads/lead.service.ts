@@ -1,37 +1,24 @@
-import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import { createHash, randomBytes, randomUUID, timingSafeEqual } from 'node:crypto';
 import { UniqueConstraintViolationException } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { z } from 'zod';
-import type { leadRequestSchema } from '../../shared/lead-schemas';
+import type { Project } from '~/lib/estimate';
+import { isId } from '~/lib/shared/ids';
+import type { LeadSource } from '~/lib/shared/labels';
+import type { Contact } from '~/lib/shared/lead-schemas';
 import type { Company } from '../companies/company.entity';
 import { config } from '../config';
-import { InvalidInput, NotFound } from '../errors';
-import { verifyFormToken } from '../embed/form-token';
-import { estimateWithPublishedRates } from '../embed/estimate.service';
-import { recordFunnelStep } from '../embed/funnel';
-import { presentForHomeowner, type HomeownerEstimate } from '../embed/present-estimate';
+import { NotFound, UnprocessableContent } from '../errors';
+import type { FirmEstimate } from '../estimates/estimate.service';
+import { estimateSnapshot } from '../estimates/estimate-snapshot';
+import { presentForHomeowner, type HomeownerEstimate } from '../estimates/present-estimate';
 import { enqueueMail } from '../mail/outbox';
 import { kickMailDelivery } from '../mail/worker';
-import { LeadPhoto } from '../photos/lead-photo.entity';
-import { attachDraftPhotos } from '../photos/lead-photo.service';
 import { Lead } from './lead.entity';
+import { leadInputs } from './lead-inputs';
 import { homeownerConfirmation, newLeadAlert } from './lead-mail';
 import { newLeadReference } from './lead-reference';
 
-export type LeadRequest = z.output<typeof leadRequestSchema>;
-
-/** Humans take longer than this between opening the form and sending it; scripts often do not. */
-export const MIN_SECONDS_TO_SUBMIT = 4;
-
-export type SubmittedLead = {
-  /** False when the submission looked automated: the answer looks the same, but nothing is stored. */
-  stored: boolean;
-  reference: string;
-  viewUrl: string | null;
-  estimate: HomeownerEstimate | null;
-};
-
-const digest = (token: string) => createHash('sha256').update(token).digest('hex');
+const digest = (text: string) => createHash('sha256').update(text).digest('hex');
 
 export function leadViewUrl(leadId: string, token: string): string {
   return `${config.publicOrigin}/estimate/${leadId}?key=${token}`;
@@ -41,97 +28,115 @@ export function staffLeadUrl(leadId: string): string {
   return `${config.publicOrigin}/app/leads/${leadId}`;
 }
 
-/** Whether a postcode is inside the firm's service area (leading characters match; empty list = anywhere). */
-export function servesPostcode(company: Company, postcode: string): boolean {
-  const compact = postcode.replace(/[\s-]/g, '').toUpperCase();
-  return company.servicePostcodes.length === 0 || company.servicePostcodes.some((prefix) => compact.startsWith(prefix.replace(/[\s-]/g, '').toUpperCase()));
-}
+export type NewLead = {
+  contact: Contact;
+  /** The project as priced, photo count included. */
+  project: Project;
+  estimate: FirmEstimate;
+  source: LeadSource;
+  consentAt: Date;
+  /** The sender's key: the same key again answers the same lead. Staff entries get a fresh one. */
+  idempotencyKey?: string;
+  /** The widget draft its photos were uploaded under. */
+  draftId?: string | null;
+  /** Photos that go with it, for the firm's alert. */
+  photoCount?: number;
+};
 
-/** Ready photos uploaded under a widget draft. */
-export function readyPhotoCount(em: EntityManager, companyId: string, draftId: string): Promise<number> {
-  return em.count(LeadPhoto, { company: companyId, draftId, status: 'ready' });
+export type CreatedLead = {
+  lead: Lead;
+  /** The homeowner's private link; only known when the lead was created by this call. */
+  viewUrl: string | null;
+  estimate: HomeownerEstimate;
+};
+
+/** Everything that was sent with an idempotency key, as one digest. Parsed input has a fixed key order. */
+export function requestDigestOf(input: { project: Project; contact: Contact }): string {
+  return digest(JSON.stringify({ project: input.project, contact: input.contact }));
 }
 
 /**
- * Turns a homeowner's submission into a lead: recomputes the estimate on the server, stores the
- * lead with its photos and both e-mails in one transaction, and answers the same lead again for a
- * repeated idempotency key.
+ * The lead an idempotency key already made, or null. The same key with a different body is refused
+ * (422), as the IETF Idempotency-Key draft describes, instead of silently answering the first lead.
  */
-export async function submitLead(em: EntityManager, company: Company, request: LeadRequest, now = Date.now()): Promise<SubmittedLead> {
-  const token = verifyFormToken(request.formToken, company.id, now);
-
-  const looksAutomated = (request.website ?? '').trim() !== '' || now - token.issuedAt < MIN_SECONDS_TO_SUBMIT * 1000;
-  if (looksAutomated) return { stored: false, reference: 'RECEIVED', viewUrl: null, estimate: null };
-
-  const existing = await em.findOne(Lead, { company, idempotencyKey: request.idempotencyKey });
-  if (existing) return answerFor(existing);
-
-  if (!servesPostcode(company, request.contact.postcode)) {
-    throw new InvalidInput('Outside the service area.', {
-      'contact.postcode': `Sorry, ${company.name} doesn't work in ${request.contact.postcode} yet. You're welcome to call them all the same${company.phone ? ` on ${company.phone}` : ''}.`,
+export async function leadForIdempotencyKey(em: EntityManager, company: Company, key: string, requestDigest: string): Promise<CreatedLead | null> {
+  const existing = await em.findOne(Lead, { company, idempotencyKey: key }, { populate: ['estimate'] });
+  if (!existing) return null;
+  if (existing.requestDigest && existing.requestDigest !== requestDigest) {
+    throw new UnprocessableContent('This request key was already used for a different inquiry. Reload the page and send again.', {
+      idempotencyKey: 'Already used for a different inquiry.',
     });
   }
+  // The private link's secret is only shown once; a repeat answer carries the rest.
+  return { lead: existing, viewUrl: null, estimate: presentForHomeowner(estimateSnapshot.read(existing.estimate)) };
+}
 
-  const photoCount = await readyPhotoCount(em, company.id, token.draftId);
-  const project = { ...request.project, photoCount };
-  const { result, rates } = await estimateWithPublishedRates(em, company, project);
-  const view = presentForHomeowner(result);
+/**
+ * Stores a new lead with its estimate snapshot and Rate book version, and queues the homeowner's
+ * confirmation and the firm's alert in the same transaction. `inTransaction` runs inside that
+ * transaction after the lead is created (the widget attaches the draft's photos there). A race on
+ * one idempotency key answers the lead the other request stored.
+ */
+export async function createLead(
+  em: EntityManager,
+  company: Company,
+  input: NewLead,
+  inTransaction?: (tx: EntityManager, lead: Lead) => Promise<void>,
+): Promise<CreatedLead> {
   const viewToken = randomBytes(24).toString('base64url');
-
+  const idempotencyKey = input.idempotencyKey ?? randomUUID();
+  const requestDigest = input.idempotencyKey ? requestDigestOf(input) : null;
+  const { result, version, view } = input.estimate;
   try {
     const lead = await em.transactional(async (tx) => {
       const lead = tx.create(Lead, {
         company,
         reference: newLeadReference(),
-        name: request.contact.name,
-        email: request.contact.email,
-        phone: request.contact.phone,
-        address: request.contact.address,
-        postcode: request.contact.postcode,
-        preferredContact: request.contact.preferredContact,
-        message: request.contact.message || null,
-        consentAt: new Date(now),
-        inputs: project as unknown as Record<string, unknown>,
-        estimate: result as unknown as Record<string, unknown>,
-        rateBookVersion: rates.version,
+        source: input.source,
+        name: input.contact.name,
+        email: input.contact.email,
+        phone: input.contact.phone,
+        address: input.contact.address,
+        postcode: input.contact.postcode,
+        preferredContact: input.contact.preferredContact,
+        message: input.contact.message || null,
+        consentAt: input.consentAt,
+        inputs: leadInputs.wrap(input.project),
+        estimate: estimateSnapshot.wrap(result),
+        rateBookVersion: version,
         rangeLowCents: result.price.lowCents,
         rangeHighCents: result.price.highCents,
-        idempotencyKey: request.idempotencyKey,
-        draftId: token.draftId,
+        idempotencyKey,
+        requestDigest,
+        draftId: input.draftId ?? null,
         viewTokenHash: digest(viewToken),
       });
-      await attachDraftPhotos(tx, { companyId: company.id, draftId: token.draftId, lead });
+      await inTransaction?.(tx, lead);
 
-      const facts = { ...request.contact, reference: lead.reference, message: lead.message };
+      const facts = { ...input.contact, reference: lead.reference, message: lead.message };
       const confirmation = homeownerConfirmation(company, facts, view, leadViewUrl(lead.id, viewToken));
       enqueueMail(tx, { to: lead.email, ...confirmation, companyId: company.id, replyTo: company.notificationEmails[0] });
-      const alert = newLeadAlert(company, facts, view, staffLeadUrl(lead.id), photoCount);
+      const alert = newLeadAlert(company, facts, view, staffLeadUrl(lead.id), input.photoCount ?? 0);
       for (const to of company.notificationEmails) enqueueMail(tx, { to, ...alert, companyId: company.id, replyTo: lead.email });
       await tx.flush();
-      await recordFunnelStep(tx, company.id, token.draftId, 'lead-sent');
       return lead;
     });
     kickMailDelivery();
-    return { stored: true, reference: lead.reference, viewUrl: leadViewUrl(lead.id, viewToken), estimate: view };
+    return { lead, viewUrl: leadViewUrl(lead.id, viewToken), estimate: view };
   } catch (error) {
     // Two sends with one key raced: the other one stored the lead.
-    if (error instanceof UniqueConstraintViolationException) {
-      const raced = await em.fork().findOne(Lead, { company, idempotencyKey: request.idempotencyKey });
-      if (raced) return answerFor(raced);
+    if (error instanceof UniqueConstraintViolationException && requestDigest) {
+      const raced = await leadForIdempotencyKey(em.fork(), company, idempotencyKey, requestDigest);
+      if (raced) return raced;
     }
     throw error;
   }
 }
 
-function answerFor(lead: Lead): SubmittedLead {
-  // The private link's secret is only shown once; a repeat answer carries the rest.
-  return { stored: true, reference: lead.reference, viewUrl: null, estimate: presentForHomeowner(lead.estimate as never) };
-}
-
 /** The homeowner's private view of their estimate; a wrong key looks like a missing lead. */
 export async function leadForViewKey(em: EntityManager, leadId: string, key: string): Promise<Lead> {
-  if (!/^[0-9a-f-]{36}$/.test(leadId) || !/^[A-Za-z0-9_-]{20,64}$/.test(key)) throw new NotFound();
-  const lead = await em.findOne(Lead, { id: leadId }, { populate: ['company'] });
+  if (!isId(leadId) || !/^[A-Za-z0-9_-]{20,64}$/.test(key)) throw new NotFound();
+  const lead = await em.findOne(Lead, { id: leadId }, { populate: ['company', 'estimate'] });
   if (!lead) throw new NotFound();
   const expected = Buffer.from(lead.viewTokenHash, 'hex');
   const given = Buffer.from(digest(key), 'hex');

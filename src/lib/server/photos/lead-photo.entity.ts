@@ -1,5 +1,5 @@
 import { Entity, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
-import { TenantEntity } from '../db/base.entity';
+import { TenantEntity } from '../companies/tenant.entity';
 import type { Lead } from '../leads/lead.entity';
 
 export type PhotoStatus = 'pending' | 'ready' | 'refused';

@@ -12,7 +12,7 @@
 import { randomUUID } from 'node:crypto';
 import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { displayName, MAX_PHOTO_BYTES, MAX_PHOTOS, PHOTO_MESSAGES } from '../../shared/photo-schemas';
+import { displayName, MAX_PHOTO_BYTES, MAX_PHOTOS, PHOTO_MESSAGES } from '~/lib/shared/photo-schemas';
 import { Conflict, InvalidInput, NotFound } from '../errors';
 import { Lead } from '../leads/lead.entity';
 import * as storage from '../storage/s3';
@@ -40,6 +40,11 @@ export type UploadTicket = { photo: LeadPhoto; upload: storage.PresignedUpload }
 const uploadKey = (companyId: string, draftId: string) => `uploads/${companyId}/${draftId}/${randomUUID()}`;
 const imageKey = (companyId: string, photoId: string) => `photos/${companyId}/${photoId}.jpg`;
 const thumbKey = (companyId: string, photoId: string) => `thumbs/${companyId}/${photoId}.jpg`;
+
+/** Ready photos uploaded under a widget draft: what the range is narrowed by, whatever the page claims. */
+export function readyPhotoCount(em: EntityManager, { companyId, draftId }: DraftRef): Promise<number> {
+  return em.count(LeadPhoto, { company: companyId, draftId, status: 'ready' });
+}
 
 /** Photos that count against the draft's limit: ready ones, and pending ones still within their hold. */
 function countedPhotos(em: EntityManager, { companyId, draftId }: DraftRef, now: number): Promise<number> {
@@ -189,7 +194,7 @@ export async function attachDraftPhotos(
   return photos;
 }
 
-/** A lead's checked photos, oldest first, for the Desk. */
+/** A lead's checked photos, oldest first, for the inquiry page. */
 export function photosOfLead(em: EntityManager, { companyId, leadId }: { companyId: string; leadId: string }): Promise<LeadPhoto[]> {
   return em.find(LeadPhoto, { company: companyId, lead: leadId, status: 'ready' }, { orderBy: { createdAt: 'asc' } });
 }

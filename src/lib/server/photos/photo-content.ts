@@ -6,7 +6,7 @@
  */
 import sharp from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
-import { ACCEPTED_PHOTO_TYPES, PHOTO_LONG_EDGE_PX, PHOTO_MESSAGES } from '../../shared/photo-schemas';
+import { ACCEPTED_PHOTO_TYPES, PHOTO_LONG_EDGE_PX, PHOTO_MESSAGES } from '~/lib/shared/photo-schemas';
 
 /**
  * Largest decoded image we accept. A small, highly compressible file can decode to gigabytes of

@@ -1,6 +1,7 @@
-import { Entity, Property, Unique, type Opt } from '@mikro-orm/core';
-import { TenantEntity } from '../db/base.entity';
-import type { RateBookInput } from '../../estimate';
+import { Entity, Index, Property, Unique, type Opt } from '@mikro-orm/core';
+import { TenantEntity } from '../companies/tenant.entity';
+import type { RateBookInput } from '~/lib/estimate';
+import type { Envelope } from '../db/versioned-json';
 
 export type RateBookStatus = 'draft' | 'published' | 'retired';
 
@@ -10,6 +11,11 @@ export type RateBookStatus = 'draft' | 'published' | 'retired';
  */
 @Entity({ tableName: 'rate_book_version' })
 @Unique({ properties: ['company', 'number'] })
+// At most one published version per firm, whatever races between two publishers.
+@Index({
+  name: 'rate_book_version_one_published',
+  expression: `create unique index "rate_book_version_one_published" on "rate_book_version" ("company_id") where "status" = 'published'`,
+})
 export class RateBookVersion extends TenantEntity {
   /** 1, 2, 3 … per firm. */
   @Property({ type: 'integer' })
@@ -18,9 +24,9 @@ export class RateBookVersion extends TenantEntity {
   @Property({ type: 'string', length: 12 })
   status: RateBookStatus & Opt = 'draft';
 
-  /** The owner's numbers, as validated by the estimating core's rate-book schema. */
+  /** The owner's numbers, as validated by the estimating core's rate-book schema; read with `storedRateBook.read`. */
   @Property({ type: 'json' })
-  data!: RateBookInput;
+  data!: Envelope<RateBookInput>;
 
   @Property({ type: 'string', length: 200, nullable: true })
   note: string | null = null;

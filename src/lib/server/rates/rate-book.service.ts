@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { parseRateBook, type RateBook } from '../../estimate';
+import type { RateBook } from '~/lib/estimate';
 import { RateBookVersion } from './rate-book-version.entity';
+import { storedRateBook } from './stored-rate-book';
 import { AppError } from '../errors';
 
 export type PublishedRates = { version: RateBookVersion; rateBook: RateBook };
@@ -25,7 +26,7 @@ export async function publishedRates(em: EntityManager, companyId: string): Prom
   if (!version) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
   let rateBook = parsedByVersion.get(version.id);
   if (!rateBook) {
-    rateBook = parseRateBook(version.data);
+    rateBook = storedRateBook.read(version.data);
     if (parsedByVersion.size > 500) parsedByVersion.clear();
     parsedByVersion.set(version.id, rateBook);
   }

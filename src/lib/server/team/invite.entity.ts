@@ -1,5 +1,5 @@
 import { Entity, ManyToOne, Property, Unique } from '@mikro-orm/core';
-import { TenantEntity } from '../db/base.entity';
+import { TenantEntity } from '../companies/tenant.entity';
 import type { Role } from '../users/membership.entity';
 import type { User } from '../users/user.entity';
 

@@ -1,5 +1,5 @@
 import { config } from '../config';
-import { ROLE_LABELS, type StaffRole } from '../../shared/auth-schemas';
+import { ROLE_LABELS, type StaffRole } from '~/lib/shared/labels';
 
 /** The invitation e-mail. Plain text only: no markup to escape, and it reads well everywhere. */
 export function inviteMail(input: { firmName: string; inviterName: string | null; role: StaffRole; token: string; expiresAt: Date }) {

@@ -1,5 +1,6 @@
 import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { isId } from '~/lib/shared/ids';
 import { Company } from '../companies/company.entity';
 import { Conflict, NotFound } from '../errors';
 import { enqueueMail } from '../mail/outbox';
@@ -59,6 +60,7 @@ export async function inviteToTeam(
 
 /** Withdraws an open invitation of this firm. */
 export async function cancelInvite(em: EntityManager, input: { companyId: string; inviteId: string }): Promise<void> {
+  if (!isId(input.inviteId)) throw new NotFound('There is no open invitation with that id.');
   const removed = await em.nativeDelete(Invite, { id: input.inviteId, company: input.companyId, acceptedAt: null });
   if (!removed) throw new NotFound('There is no open invitation with that id.');
 }
@@ -68,6 +70,7 @@ export async function cancelInvite(em: EntityManager, input: { companyId: string
  * each other at the same moment cannot leave the firm without one.
  */
 async function lockTeam(tx: EntityManager, companyId: string, membershipId: string): Promise<{ target: Membership; owners: number }> {
+  if (!isId(membershipId)) throw new NotFound('There is no team member with that id.');
   const all = await tx.find(Membership, { company: companyId }, { lockMode: LockMode.PESSIMISTIC_WRITE, populate: ['user'] });
   const target = all.find((m) => m.id === membershipId);
   if (!target) throw new NotFound('There is no team member with that id.');

@@ -1,9 +1,9 @@
 import { Entity, ManyToOne, Property, Unique } from '@mikro-orm/core';
-import { TenantEntity } from '../db/base.entity';
+import { TenantEntity } from '../companies/tenant.entity';
+import type { StaffRole } from '~/lib/shared/labels';
 import type { User } from './user.entity';
 
-export const ROLES = ['owner', 'sales'] as const;
-export type Role = (typeof ROLES)[number];
+export type Role = StaffRole;
 
 /** A person's place in one firm. A person may belong to several firms, with a role in each. */
 @Entity({ tableName: 'membership' })

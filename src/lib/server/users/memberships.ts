@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { ActiveMembership } from '../auth/types';
+import type { ActiveMembership } from './types';
 import { Membership } from './membership.entity';
 
 /** Every firm a person belongs to, with their role in each, by firm name. */

@@ -1,4 +1,4 @@
-import { staffEndpoint } from '../../../lib/server/auth/staff-endpoint';
+import { staffEndpoint } from '~/lib/server/auth/staff-endpoint';
 
 /** Who is signed in, in which firm, as what (for islands that adapt to the role). */
 export const GET = staffEndpoint({}, ({ staff, locals }) =>

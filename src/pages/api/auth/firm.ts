@@ -1,9 +1,9 @@
 import type { APIRoute } from 'astro';
-import { requireStaff } from '../../../lib/server/auth/guard';
-import { setSessionFirm } from '../../../lib/server/auth/sessions';
-import { errorResponse, NotFound } from '../../../lib/server/errors';
-import { parseInput, readForm } from '../../../lib/server/http';
-import { switchFirmSchema } from '../../../lib/shared/auth-schemas';
+import { requireStaff } from '~/lib/server/auth/guard';
+import { setSessionFirm } from '~/lib/server/auth/sessions';
+import { errorResponse, NotFound } from '~/lib/server/errors';
+import { parseInput, readForm } from '~/lib/server/http';
+import { switchFirmSchema } from '~/lib/shared/auth-schemas';
 
 /** Switches the firm this session works in, to another firm the same person belongs to. */
 export const POST: APIRoute = async ({ locals, request, redirect }) => {

@@ -1,12 +1,9 @@
 import type { APIRoute } from 'astro';
-import { estimateRequestSchema } from '../../../../lib/shared/lead-schemas';
-import { readJson } from '../../../../lib/server/http';
-import { verifyFormToken } from '../../../../lib/server/embed/form-token';
-import { estimateWithPublishedRates } from '../../../../lib/server/embed/estimate.service';
-import { recordFunnelStep } from '../../../../lib/server/embed/funnel';
-import { presentForHomeowner } from '../../../../lib/server/embed/present-estimate';
-import { preflight, publicEndpoint } from '../../../../lib/server/embed/public-api';
-import { readyPhotoCount } from '../../../../lib/server/leads/lead.service';
+import { estimateRequestSchema } from '~/lib/shared/lead-schemas';
+import { readJson } from '~/lib/server/http';
+import { recordFunnelStep } from '~/lib/server/embed/funnel';
+import { preflight, publicEndpoint } from '~/lib/server/embed/public-api';
+import { estimateForDraft, openWidgetDraft } from '~/lib/server/embed/widget-estimate';
 
 /** The widget's live price range, computed from the firm's published rates (which stay here). */
 export const POST: APIRoute = publicEndpoint(
@@ -14,12 +11,10 @@ export const POST: APIRoute = publicEndpoint(
   { perAddress: { points: 60, duration: 60 }, perFirm: { points: 3000, duration: 60 } },
   async ({ em, company, request }) => {
     const body = await readJson(request, estimateRequestSchema);
-    const token = verifyFormToken(body.formToken, company.id);
-    // The photo count that widens or narrows the range is what actually arrived, not what the page says.
-    const photoCount = await readyPhotoCount(em, company.id, token.draftId);
-    const { result } = await estimateWithPublishedRates(em, company, { ...body.project, photoCount });
+    const token = openWidgetDraft(company, body.formToken);
+    const { view } = await estimateForDraft(em, company, token, body.project);
     await recordFunnelStep(em, company.id, token.draftId, 'first-estimate');
-    return { status: 200, body: { estimate: presentForHomeowner(result) } };
+    return { status: 200, body: { estimate: view } };
   },
 );
 

@@ -1,11 +1,11 @@
-import { staffEndpoint } from '../../../../../lib/server/auth/staff-endpoint';
-import { NotFound } from '../../../../../lib/server/errors';
-import { cancelInvite } from '../../../../../lib/server/team/team.service';
-import { isUuid } from '../../../../../lib/server/team/ids';
+import { staffEndpoint } from '~/lib/server/auth/staff-endpoint';
+import { NotFound } from '~/lib/server/errors';
+import { cancelInvite } from '~/lib/server/team/team.service';
+import { isId } from '~/lib/shared/ids';
 
 /** Withdraws an open invitation of the active firm. Owner only. */
 export const DELETE = staffEndpoint({ role: 'owner' }, async ({ staff, locals, params }) => {
-  if (!isUuid(params.id)) throw new NotFound();
+  if (!isId(params.id)) throw new NotFound();
   await cancelInvite(locals.em, { companyId: staff.companyId, inviteId: params.id });
   return new Response(null, { status: 204 });
 });

@@ -1,8 +1,8 @@
-import { staffEndpoint } from '../../../../../lib/server/auth/staff-endpoint';
-import { readJson } from '../../../../../lib/server/http';
-import { kickMailDelivery } from '../../../../../lib/server/mail/worker';
-import { inviteToTeam } from '../../../../../lib/server/team/team.service';
-import { inviteSchema } from '../../../../../lib/shared/auth-schemas';
+import { staffEndpoint } from '~/lib/server/auth/staff-endpoint';
+import { readJson } from '~/lib/server/http';
+import { kickMailDelivery } from '~/lib/server/mail/worker';
+import { inviteToTeam } from '~/lib/server/team/team.service';
+import { inviteSchema } from '~/lib/shared/auth-schemas';
 
 /** Invites a person by e-mail with a role. Owner only. */
 export const POST = staffEndpoint({ role: 'owner' }, async ({ staff, locals, request }) => {

@@ -1,19 +1,19 @@
 // POST /api/embed/SLUG/photos/ID/complete — {formToken} → 200 {photo: {id, width, height, thumbnailUrl}}
 // or 400 {error, fields: {photo}} when the file is refused.
 import type { APIRoute } from 'astro';
-import { errorResponse } from '../../../../../../lib/server/errors';
-import { completeUpload } from '../../../../../../lib/server/photos/lead-photo.service';
-import { limitPhotoCalls } from '../../../../../../lib/server/photos/photo-rate-limit';
-import { presentWidgetPhoto } from '../../../../../../lib/server/photos/present-photo';
-import { openDraftPhoto } from '../../../../../../lib/server/photos/widget-draft';
+import { readJson } from '~/lib/server/http';
+import { PHOTO_CALL_LIMITS, photoIdOf } from '~/lib/server/embed/photo-limits';
+import { preflight, publicEndpoint } from '~/lib/server/embed/public-api';
+import { openWidgetDraft } from '~/lib/server/embed/widget-estimate';
+import { completeUpload } from '~/lib/server/photos/lead-photo.service';
+import { presentWidgetPhoto } from '~/lib/server/photos/present-photo';
+import { photoFormTokenSchema } from '~/lib/shared/photo-schemas';
 
-export const POST: APIRoute = async ({ params, request, locals, clientAddress }) => {
-  try {
-    await limitPhotoCalls(clientAddress);
-    const { company, draftId, photoId } = await openDraftPhoto(locals.em, params.slug ?? '', params.id, request);
-    const photo = await completeUpload(locals.em, { companyId: company.id, draftId, photoId });
-    return Response.json({ photo: await presentWidgetPhoto(photo) });
-  } catch (error) {
-    return errorResponse(error);
-  }
-};
+export const POST: APIRoute = publicEndpoint('widget-photos', PHOTO_CALL_LIMITS, async ({ em, company, request, params }) => {
+  const photoId = photoIdOf(params.id);
+  const { draftId } = openWidgetDraft(company, (await readJson(request, photoFormTokenSchema)).formToken);
+  const photo = await completeUpload(em, { companyId: company.id, draftId, photoId });
+  return { status: 200, body: { photo: await presentWidgetPhoto(photo) } };
+});
+
+export const OPTIONS: APIRoute = preflight();

@@ -10,6 +10,6 @@ import { User } from '../users/user.entity';
 import { Session } from '../auth/session.entity';
 import { PasswordReset } from '../auth/password-reset.entity';
 import { Invite } from '../team/invite.entity';
-import { RateLimitEntry } from './rate-limit-entry.entity';
+import { RateLimitEntry } from '../db/rate-limit-entry.entity';
 
 export const entities = [Company, User, Membership, OutboxMail, RateBookVersion, Lead, LeadPhoto, FunnelEvent, Session, PasswordReset, Invite, RateLimitEntry];

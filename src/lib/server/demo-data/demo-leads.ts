@@ -2,12 +2,14 @@
 // for fiction); e-mail addresses use the reserved .test domain.
 import { createHash } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { estimate, type ProjectInput, type RateBookInput } from '../../../estimate';
-import type { Company } from '../../companies/company.entity';
-import { Lead } from '../../leads/lead.entity';
-import { newLeadReference } from '../../leads/lead-reference';
-import type { LeadStage } from '../../leads/stages';
-import type { RateBookVersion } from '../../rates/rate-book-version.entity';
+import { estimate, type ProjectInput, type RateBook } from '~/lib/estimate';
+import type { Company } from '../companies/company.entity';
+import { estimateSnapshot } from '../estimates/estimate-snapshot';
+import { Lead } from '../leads/lead.entity';
+import { leadInputs } from '../leads/lead-inputs';
+import { newLeadReference } from '../leads/lead-reference';
+import type { LeadStage } from '~/lib/shared/labels';
+import type { RateBookVersion } from '../rates/rate-book-version.entity';
 
 const FIRST = ['Maya', 'Jonah', 'Priya', 'Elliot', 'Rosa', 'Dev', 'Hannah', 'Tomas', 'Grace', 'Omar', 'Leah', 'Wes', 'Ines', 'Caleb', 'Noor', 'Felix', 'June', 'Arlo', 'Tess', 'Ravi'];
 const LAST = ['Pike', 'Alder', 'Quill', 'Hartwell', 'Osei', 'Lund', 'Marsh', 'Castillo', 'Brandt', 'Yoon', 'Farrow', 'Nakamura', 'Doyle', 'Ibarra', 'Kessler', 'Moreau', 'Sato', 'Whitlock', 'Varga', 'Ellery'];
@@ -23,12 +25,12 @@ const ROOMS: { name: string; length: number; width: number; damp?: boolean }[] =
 /** How many demo leads sit in each stage (40 in all). */
 const STAGE_MIX: [LeadStage, number][] = [
   ['new', 12],
-  ['called-back', 7],
+  ['spoken-to', 7],
   ['visit-booked', 6],
   ['measured', 4],
   ['quote-sent', 4],
-  ['won', 4],
-  ['not-proceeding', 3],
+  ['going-ahead', 4],
+  ['not-going-ahead', 3],
 ];
 
 /** A small deterministic generator so the demo looks the same on every machine. */
@@ -40,7 +42,7 @@ function generator(seed: number) {
   };
 }
 
-export async function seedDemoLeads(em: EntityManager, company: Company, version: RateBookVersion, rateBook: RateBookInput, postcodes: string[]): Promise<number> {
+export async function seedDemoLeads(em: EntityManager, company: Company, version: RateBookVersion, rateBook: RateBook, postcodes: string[]): Promise<number> {
   if ((await em.count(Lead, { company })) > 0) return 0;
   const random = generator(company.slug.length * 7919);
   const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)]!;
@@ -97,8 +99,8 @@ export async function seedDemoLeads(em: EntityManager, company: Company, version
         preferredContact: pick(['phone', 'email', 'text'] as const),
         message: random() < 0.3 ? 'We would like this done before the holidays if possible.' : null,
         consentAt: createdAt,
-        inputs: project as unknown as Record<string, unknown>,
-        estimate: result as unknown as Record<string, unknown>,
+        inputs: leadInputs.wrap(project),
+        estimate: estimateSnapshot.wrap(result),
         rateBookVersion: version,
         rangeLowCents: result.price.lowCents,
         rangeHighCents: result.price.highCents,

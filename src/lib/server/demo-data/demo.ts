@@ -1,12 +1,13 @@
 // The invented demo scenario: two firms on one installation, so tenant isolation shows.
 // Only the start command seeds this; no production path imports it.
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { Company } from '../../companies/company.entity';
-import { Membership, type Role } from '../../users/membership.entity';
-import { User } from '../../users/user.entity';
-import { hashPassword } from '../../users/password';
-import { RateBookVersion } from '../../rates/rate-book-version.entity';
-import { sampleRateBook, type RateBookInput } from '../../../estimate';
+import { Company } from '../companies/company.entity';
+import { Membership, type Role } from '../users/membership.entity';
+import { User } from '../users/user.entity';
+import { hashPassword } from '../users/password';
+import { RateBookVersion } from '../rates/rate-book-version.entity';
+import { storedRateBook } from '../rates/stored-rate-book';
+import { sampleRateBook, type RateBookInput } from '~/lib/estimate';
 import { seedDemoLeads } from './demo-leads';
 import { seedDemoPhotos } from './demo-photos';
 
@@ -97,14 +98,14 @@ export async function seedDemo(em: EntityManager): Promise<string> {
     let published = await em.findOne(RateBookVersion, { company, status: 'published' });
     const rates = firm.rates(sampleRateBook());
     if (!published) {
-      published = em.create(RateBookVersion, { company, number: 1, status: 'published', data: rates, note: 'Starting rates', publishedAt: new Date() });
+      published = em.create(RateBookVersion, { company, number: 1, status: 'published', data: storedRateBook.wrap(rates), note: 'Starting rates', publishedAt: new Date() });
       // A draft the owner is still working on: labour up five per cent.
       const draft = { ...rates, labour: { ...rates.labour, rateCents: Math.round(rates.labour.rateCents * 1.05) } };
-      em.create(RateBookVersion, { company, number: 2, status: 'draft', data: draft, note: 'Spring prices (draft)' });
+      em.create(RateBookVersion, { company, number: 2, status: 'draft', data: storedRateBook.wrap(draft), note: 'Spring prices (draft)' });
       await em.flush();
       created += 2;
     }
-    created += await seedDemoLeads(em, company, published, published.data, firm.servicePostcodes);
+    created += await seedDemoLeads(em, company, published, storedRateBook.read(published.data), firm.servicePostcodes);
     created += await seedDemoPhotos(em, company);
   }
   return created ? `${created} rows added` : 'already present';

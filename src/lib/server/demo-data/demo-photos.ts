@@ -3,11 +3,11 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import sharp from 'sharp';
-import type { Company } from '../../companies/company.entity';
-import { Lead } from '../../leads/lead.entity';
-import { LeadPhoto } from '../../photos/lead-photo.entity';
-import { cleanPhoto } from '../../photos/photo-content';
-import { putObject } from '../../storage/s3';
+import type { Company } from '../companies/company.entity';
+import { Lead } from '../leads/lead.entity';
+import { LeadPhoto } from '../photos/lead-photo.entity';
+import { cleanPhoto } from '../photos/photo-content';
+import { putObject } from '../storage/s3';
 
 function wallPicture(tone: string, boards: number): Buffer {
   const lines = Array.from({ length: boards }, (_, i) => `<line x1="${(i + 1) * (1200 / (boards + 1))}" y1="380" x2="${(i + 1) * (1200 / (boards + 1))}" y2="900" stroke="#6E5A3E" stroke-width="4"/>`).join('');

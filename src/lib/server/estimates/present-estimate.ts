@@ -1,5 +1,5 @@
-import type { Estimate } from '../../estimate';
-import type { HomeownerEstimate } from '../../shared/homeowner-estimate';
+import type { Estimate } from '~/lib/estimate';
+import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
 
 export type { HomeownerEstimate };
 

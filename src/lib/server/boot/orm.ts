@@ -1,5 +1,6 @@
 import { MikroORM } from '@mikro-orm/postgresql';
 import type { Migration } from '@mikro-orm/migrations';
+import { provideOrm } from '../db/orm-provider';
 
 // Vite bundles the migrations into the server, because the migrator's own file loading uses a
 // native import() of .ts files that only works under tsx (the CLI), not in the built app or vitest.
@@ -25,6 +26,8 @@ export function getOrm(): Promise<MikroORM> {
   })();
   return ormPromise;
 }
+
+provideOrm(getOrm);
 
 /** Opens a separate ORM on another database (tests use it for throwaway databases). */
 export async function openOrm(clientUrl: string): Promise<MikroORM> {
