@@ -20,26 +20,28 @@ function check(cuts: number[], stockLength: number, kerf: number): void {
   }
 }
 
-/** First-fit decreasing on kerf-grown sizes; returns the bins as lists of indexes into `sizes`. */
+/**
+ * First-fit decreasing on kerf-grown sizes; returns the bins as lists of indexes into `sizes`.
+ * The leftmost bin with room is found in a max-tree over the bins' room (O(n log n) rather than a
+ * scan of every open bin): bins not yet opened hold a whole stock length and sit right of every
+ * open one, so the leftmost bin that fits is exactly the one plain first fit would pick.
+ */
 function firstFitDecreasing(sizes: number[], cap: number): number[][] {
   const order = sizes.map((_, i) => i).sort((a, b) => sizes[b]! - sizes[a]!);
-  const room: number[] = [];
+  let leaves = 1;
+  while (leaves < sizes.length) leaves *= 2;
+  // tree[1] is the root; leaf b sits at tree[leaves + b]; each node holds the most room below it.
+  const tree = new Float64Array(2 * leaves).fill(cap);
   const bins: number[][] = [];
   for (const i of order) {
     const s = sizes[i]!;
-    let placed = false;
-    for (let b = 0; b < room.length; b++) {
-      if (room[b]! + EPS >= s) {
-        room[b] = room[b]! - s;
-        bins[b]!.push(i);
-        placed = true;
-        break;
-      }
-    }
-    if (!placed) {
-      room.push(cap - s);
-      bins.push([i]);
-    }
+    let node = 1;
+    while (node < leaves) node = tree[2 * node]! + EPS >= s ? 2 * node : 2 * node + 1;
+    const b = node - leaves;
+    if (b === bins.length) bins.push([]);
+    bins[b]!.push(i);
+    tree[node] = tree[node]! - s;
+    for (node >>= 1; node >= 1; node >>= 1) tree[node] = Math.max(tree[2 * node]!, tree[2 * node + 1]!);
   }
   return bins;
 }
