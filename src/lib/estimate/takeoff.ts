@@ -10,7 +10,11 @@ import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall 
 import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
 import { stockCutFor, stockLengthsOf } from './stock-lengths.ts';
 import { formatLength, type Units } from './units.ts';
+import { checkProjectSize } from './project-size.ts';
 import { validateProject } from './validate.ts';
+import { bandTopFor, wallLength } from './wall-band.ts';
+
+export { bandTopFor, wallLength };
 
 const MIN_PIECE = 0.5; // pieces shorter than half an inch are not cut
 
@@ -26,18 +30,6 @@ export function coversWall(t: Treatment): boolean {
     case 'picture-frame':
       return false;
   }
-}
-
-/** Top of the covered band: the wainscot height (one third of the ceiling when not given) or the ceiling. */
-export function bandTopFor(room: Room): number {
-  if (room.treatment.height === 'full') return room.ceilingHeight;
-  // Source: TRADE.md §8 — rule of thirds, cap at about one third of the wall height (This Old House).
-  return room.treatment.wainscotHeight ?? Math.round(room.ceilingHeight / 3);
-}
-
-export function wallLength(room: Room, wall: Wall): number {
-  if (wall.length !== undefined) return wall.length;
-  return wall.side === 'width' ? room.width! : room.length!;
 }
 
 /** Splits a run longer than `max` into full lengths and a remainder. */
@@ -495,8 +487,10 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
 
 /**
  * The takeoff of a project against a catalogue: validates the project (throws EstimateInputError
- * with field paths), then works out every wall and room and the materials list.
+ * with field paths) and its size, then works out every wall and room and the materials list.
  */
 export function takeoff(project: unknown, catalogue: Catalogue, units: Units = 'imperial'): Takeoff {
-  return takeoffOf(validateProject(project, catalogue), catalogue, units);
+  const p = validateProject(project, catalogue);
+  checkProjectSize(p, catalogue);
+  return takeoffOf(p, catalogue, units);
 }
