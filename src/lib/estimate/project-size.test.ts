@@ -1,7 +1,7 @@
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import { checkProjectSize, estimate, EstimateInputError, parseRateBook, PROJECT_LIMITS, projectSize, sampleRateBook, validateProject, type ProjectInput } from './index.ts';
-import { biggestAcceptedProject, largeHouse, schemaMaximumProject } from './sample-big-projects.ts';
+import { biggestAcceptedProject, costliestAcceptedProject, largeHouse, schemaMaximumProject } from './sample-big-projects.ts';
 
 const rateBook = parseRateBook(sampleRateBook());
 const run = (p: unknown) => estimate(p, rateBook, { rateBookParsed: true });
@@ -62,6 +62,7 @@ describe('the size of a project is checked before it is computed', () => {
     expect(size.walls).toBe(PROJECT_LIMITS.walls);
     expect(size.coveredSqFt).toBeGreaterThan(0.9 * PROJECT_LIMITS.coveredSqFt);
     expect(run(biggestAcceptedProject()).takeoff.rooms).toHaveLength(20);
+    expect(run(costliestAcceptedProject()).takeoff.rooms).toHaveLength(20);
   });
 
   it('takes its limits as an option', () => {
@@ -79,7 +80,8 @@ describe('the size of a project is checked before it is computed', () => {
   });
   const room = fc.record({
     name: fc.constant('Room'),
-    ceilingHeight: fc.integer({ min: 84, max: 240 }),
+    // Openings reach at most 30 + 60 in up, under a ceiling of at least 100 in: every project is valid.
+    ceilingHeight: fc.integer({ min: 100, max: 240 }),
     walls: fc.array(fc.record({ length: fc.integer({ min: 180, max: 600 }), openings: fc.array(opening, { maxLength: 3 }) }), { minLength: 1, maxLength: 4 }),
     treatment: fc.record({ id: fc.constantFrom(...treatments), height: fc.constant('full' as const) }),
   });

@@ -17,7 +17,7 @@ export function schemaMaximumProject(): ProjectInput {
       ceilingHeight: 240,
       walls: Array.from({ length: 16 }, () => ({
         length: 1200,
-        openings: Array.from({ length: 16 }, (_, k) => ({ kind: k % 2 ? ('window' as const) : ('door' as const), width: 36, height: 60, sillHeight: 30 })),
+        openings: Array.from({ length: 16 }, (_, k) => ({ kind: k % 2 ? ('window' as const) : ('door' as const) })),
       })),
       treatment: { id: 'shiplap-horizontal', height: 'full' as const },
     })),
@@ -70,6 +70,36 @@ export function biggestAcceptedProject(): ProjectInput {
         switches: 1,
       })),
       treatment: { id: 'shiplap-horizontal', height: 'full' as const },
+    })),
+    builtBefore1978: 'no',
+    measuredBy: 'homeowner-tape',
+  };
+}
+
+/**
+ * Inside the size limits and as costly as they allow per piece: 20 rooms of 6 walls, every wall and
+ * opening a different size (so the cut lists hold thousands of different lengths), in full-height
+ * board and batten over backing sheets.
+ */
+export function costliestAcceptedProject(): ProjectInput {
+  return {
+    rooms: Array.from({ length: 20 }, (_, r) => ({
+      name: `Room ${r + 1}`,
+      ceilingHeight: 100 + (r % 7),
+      walls: Array.from({ length: 6 }, (_, w) => {
+        const length = 300 + (((r * 6 + w) * 37) % 97) + 0.3 * w;
+        return {
+          length,
+          openings: [0, 1, 2].map((k) => ({
+            kind: 'window' as const,
+            width: 20 + (((r + w + k) * 13) % 30),
+            height: 30 + (((r * w + k) * 7) % 40),
+            sillHeight: 5 + (((r + k) * 3) % 20),
+            offset: (k * length) / 3 + ((r + w) % 10),
+          })),
+        };
+      }),
+      treatment: { id: 'board-and-batten', height: 'full' as const },
     })),
     builtBefore1978: 'no',
     measuredBy: 'homeowner-tape',
