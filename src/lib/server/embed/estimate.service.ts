@@ -1,10 +1,11 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { EstimateInputError, estimate, type Estimate } from '../../estimate';
+import { EstimateInputError, type Estimate } from '../../estimate';
 import type { Company } from '../companies/company.entity';
 import { InvalidInput } from '../errors';
 import { publishedRates, type PublishedRates } from '../rates/rate-book.service';
+import { computeEstimate } from '../estimates/estimate-pool';
 
-/** Runs the estimating core with the firm's published rates; bad project input names its fields. */
+/** Runs the estimating core (on the estimate pool) with the firm's published rates; bad project input names its fields. */
 export async function estimateWithPublishedRates(
   em: EntityManager,
   company: Company,
@@ -13,7 +14,7 @@ export async function estimateWithPublishedRates(
 ): Promise<{ result: Estimate; rates: PublishedRates }> {
   const rates = await publishedRates(em, company.id);
   try {
-    return { result: estimate(project, rates.rateBook, { rateBookParsed: true }), rates };
+    return { result: await computeEstimate(project, rates.rateBook), rates };
   } catch (error) {
     if (error instanceof EstimateInputError) {
       const fields: Record<string, string> = {};
