@@ -8,7 +8,7 @@
  */
 import { createHash } from 'node:crypto';
 import { existsSync } from 'node:fs';
-import { mkdir, rename, writeFile } from 'node:fs/promises';
+import { mkdir, readdir, rename, rm, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build } from 'esbuild';
@@ -45,8 +45,23 @@ export async function writeEstimateWorker(file: string, code?: string): Promise<
 export async function freshEstimateWorker(): Promise<string> {
   const code = await bundleEstimateWorker();
   const hash = createHash('sha256').update(code).digest('hex').slice(0, 16);
-  const file = path.join(projectRoot(), 'node_modules', '.cache', 'lapwing', `estimate-worker-${hash}.mjs`);
-  return existsSync(file) ? file : writeEstimateWorker(file, code);
+  const dir = path.join(projectRoot(), 'node_modules', '.cache', 'lapwing');
+  const file = path.join(dir, `estimate-worker-${hash}.mjs`);
+  if (existsSync(file)) return file;
+  await writeEstimateWorker(file, code);
+  await removeOldWorkers(dir, file);
+  return file;
+}
+
+/** Builds of older sources, left a day ago or more (a process started before then may still use one). */
+async function removeOldWorkers(dir: string, keep: string): Promise<void> {
+  const dayAgo = Date.now() - 24 * 3600_000;
+  for (const name of await readdir(dir)) {
+    const file = path.join(dir, name);
+    if (file === keep || !/^estimate-worker-[0-9a-f]+\.mjs$/.test(name)) continue;
+    const modified = (await stat(file).catch(() => null))?.mtimeMs ?? Infinity;
+    if (modified < dayAgo) await rm(file, { force: true });
+  }
 }
 
 function projectRoot(): string {
