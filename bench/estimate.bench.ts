@@ -1,14 +1,23 @@
 /**
  * Benchmark of the estimating core: a six-room, three-treatment project end to end (validation,
- * takeoff, materials, labour, price) and the sheet layout search on its own.
+ * takeoff, materials, labour, price) and the sheet layout search on its own; then the big projects:
+ * the biggest the schema allows (refused by the size check before any work), the biggest still
+ * accepted (worked out on this thread and on the worker pool, and the answer's size), and what it
+ * costs to hand a parsed rate book to a worker thread.
  * Run: npx tsx bench/estimate.bench.ts — writes bench/results/estimate.json.
  * The project below is invented demo data.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { estimate, estimateParsed, parseRateBook, piecesPerSheet, projectSchema, sampleRateBook, type ProjectInput } from '../src/lib/estimate/index.ts';
+import { tmpdir } from 'node:os';
+import { performance as perf } from 'node:perf_hooks';
+import { estimate, estimateParsed, EstimateInputError, parseRateBook, piecesPerSheet, projectSchema, sampleRateBook, type ProjectInput } from '../src/lib/estimate/index.ts';
+import { biggestAcceptedProject, costliestAcceptedProject, schemaMaximumProject } from '../src/lib/estimate/sample-big-projects.ts';
 import { clearSheetLayoutMemo } from '../src/lib/estimate/sheet-layout.ts';
+import { presentForHomeowner } from '../src/lib/server/estimates/present-estimate.ts';
+import { createEstimatePool } from '../src/lib/server/estimates/estimate-pool.ts';
+import { writeEstimateWorker } from '../src/lib/server/estimates/worker-bundle.ts';
 
 const TARGET_MS = 2;
 
@@ -86,6 +95,50 @@ const sheetCold = measure(
 );
 const perLayoutMs = sheetCold.medianMs / pieces.length;
 
+// The biggest project the schema allows: refused by the size check before any wall is laid out.
+const refusal = measure(
+  () => {
+    try {
+      estimate(schemaMaximumProject(), rateBook);
+    } catch (error) {
+      if (!(error instanceof EstimateInputError)) throw error;
+    }
+  },
+  3,
+  20,
+);
+const schemaMaximumRequestBytes = JSON.stringify({ project: schemaMaximumProject() }).length;
+
+// The biggest project still accepted, on this thread, and its answer to the widget.
+const big = biggestAcceptedProject();
+const bigOnThread = measure(() => estimate(big, rateBook), 2, 10);
+const bigEstimate = estimate(big, rateBook);
+const bigFullBytes = JSON.stringify(bigEstimate).length;
+const bigAnswerBytes = JSON.stringify({ estimate: presentForHomeowner(bigEstimate) }).length;
+
+// The costliest accepted project on this thread, and on the worker pool: how long the main thread's
+// event loop is busy meanwhile (taking the answer back) against the whole job.
+const costly = costliestAcceptedProject();
+const costlyOnThread = measure(() => estimate(costly, rateBook), 2, 10);
+const pool = createEstimatePool({ threads: 1, workerFile: await writeEstimateWorker(join(tmpdir(), `lapwing-bench-estimate-worker-${process.pid}.mjs`)) });
+const costlyParsed = projectSchema.parse(costly);
+await pool.compute(costlyParsed, rateBook); // the thread is up
+const poolRuns: Array<{ wallMs: number; loopBusyMs: number }> = [];
+for (let i = 0; i < 10; i++) {
+  const t0 = performance.now();
+  const elu0 = perf.eventLoopUtilization();
+  await pool.compute(costlyParsed, rateBook);
+  const elu = perf.eventLoopUtilization(elu0);
+  poolRuns.push({ wallMs: performance.now() - t0, loopBusyMs: elu.active });
+}
+await pool.close();
+const medianOf = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+// Handing the rate book to a worker: a structured clone of the parsed book, or its JSON parsed again there.
+const rateBookJson = JSON.stringify(rateBookInput);
+const cloneParsed = measure(() => structuredClone(rateBook), 200, 2000);
+const jsonAndParse = measure(() => parseRateBook(JSON.parse(rateBookJson)), 200, 2000);
+
 const e = estimate(project, rateBookInput);
 const figures = {
   estimateMedianMs: round(endToEnd.medianMs),
@@ -98,6 +151,16 @@ const figures = {
   rooms: e.takeoff.rooms.length,
   walls: e.takeoff.rooms.reduce((s, r) => s + r.walls.length, 0),
   range: e.price.rangeText,
+  schemaMaximumRequestBytes,
+  schemaMaximumRefusedMedianMs: round(refusal.medianMs),
+  biggestAcceptedOnThreadMedianMs: round(bigOnThread.medianMs),
+  costliestAcceptedOnThreadMedianMs: round(costlyOnThread.medianMs),
+  costliestAcceptedOnPoolMedianMs: round(medianOf(poolRuns.map((r) => r.wallMs))),
+  costliestAcceptedMainLoopBusyMedianMs: round(medianOf(poolRuns.map((r) => r.loopBusyMs))),
+  biggestAcceptedFullEstimateBytes: bigFullBytes,
+  biggestAcceptedAnswerBytes: bigAnswerBytes,
+  rateBookStructuredCloneMedianMs: round(cloneParsed.medianMs),
+  rateBookJsonParseMedianMs: round(jsonAndParse.medianMs),
   node: process.version,
 };
 const passed = figures.estimateMedianMs < TARGET_MS;
@@ -110,6 +173,10 @@ console.log('Estimating core benchmark');
 console.log(`  six-room estimate, end to end:     median ${figures.estimateMedianMs} ms, p95 ${figures.estimateP95Ms} ms`);
 console.log(`  same, rate book already parsed:    median ${figures.estimateParsedRateBookMedianMs} ms, p95 ${figures.estimateParsedRateBookP95Ms} ms`);
 console.log(`  sheet layout search (cold):        median ${figures.sheetLayoutColdMedianMsPerLayout} ms per layout`);
+console.log(`  biggest project the schema allows (${figures.schemaMaximumRequestBytes} bytes): refused in ${figures.schemaMaximumRefusedMedianMs} ms`);
+console.log(`  biggest accepted project: ${figures.biggestAcceptedOnThreadMedianMs} ms; its answer ${figures.biggestAcceptedAnswerBytes} bytes to the widget (full estimate ${figures.biggestAcceptedFullEstimateBytes} bytes)`);
+console.log(`  costliest accepted project: ${figures.costliestAcceptedOnThreadMedianMs} ms on this thread; on the pool ${figures.costliestAcceptedOnPoolMedianMs} ms, main loop busy ${figures.costliestAcceptedMainLoopBusyMedianMs} ms of it`);
+console.log(`  rate book to a worker: structured clone ${figures.rateBookStructuredCloneMedianMs} ms, JSON + parse ${figures.rateBookJsonParseMedianMs} ms`);
 console.log(`  target: under ${TARGET_MS} ms per six-room estimate on one core — ${passed ? 'met' : 'NOT met'}`);
 
 const out = join(dirname(fileURLToPath(import.meta.url)), 'results', 'estimate.json');

@@ -136,6 +136,15 @@ describe('sending a lead', () => {
     expect(Object.keys(error.fields ?? {})).toEqual(['formToken']);
   });
 
+  test('picture-frame moulding to the ceiling in a tall room can be sent (frame sides longer than the moulding are joined)', async () => {
+    const request = submission(cedar);
+    // 210 in ceiling: each of the two rows of frames is 96.375 in tall, longer than the 96 in moulding.
+    request.project.rooms = [{ ...request.project.rooms[0]!, ceilingHeight: 210, treatment: { id: 'picture-frame', height: 'full' } }];
+    const result = await submitLead(orm.em.fork(), cedar, request);
+    expect(result.stored).toBe(true);
+    expect(result.estimate!.notes.join(' ')).toMatch(/scarf joint/);
+  });
+
   test('a treatment the firm does not offer is refused with a field path', async () => {
     const request = submission(northgate);
     request.project.rooms[0]!.treatment.id = 'picture-frame';

@@ -1,5 +1,6 @@
 import { WallDrawing } from '~/components/drawing/WallDrawing';
 import { formatMoney } from '~/lib/estimate/money.ts';
+import { wallSummary } from '~/lib/estimate/summary.ts';
 import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
 
 /** The ballpark: the range, how it adds up, a drawing of every wall, and what to know. */
@@ -46,15 +47,25 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
             </h4>
             {/* One wall per row, so dimension labels stay readable at phone and iframe widths. */}
             <div className="mt-2 grid gap-3">
-              {room.walls.map((wall, i) => (
-                <figure key={i} className="rounded-md border border-slate/20 bg-white p-2">
-                  <WallDrawing wall={wall} units={estimate.units} treatmentName={room.treatmentName} />
-                  <figcaption className="mt-1 text-xs text-slate">{wall.label}</figcaption>
-                </figure>
-              ))}
+              {room.walls.map((wall, i) =>
+                wall.drawn === false ? (
+                  // Past the answer's drawing budget (a very big project): the wall in words.
+                  <p key={i} className="rounded-md border border-slate/20 bg-white p-2 text-sm" data-testid="wall-in-words">
+                    {wallSummary(wall, estimate.units, room.treatmentName)}
+                  </p>
+                ) : (
+                  <figure key={i} className="rounded-md border border-slate/20 bg-white p-2">
+                    <WallDrawing wall={wall} units={estimate.units} treatmentName={room.treatmentName} />
+                    <figcaption className="mt-1 text-xs text-slate">{wall.label}</figcaption>
+                  </figure>
+                ),
+              )}
             </div>
           </div>
         ))}
+        {estimate.rooms.some((room) => room.walls.some((wall) => wall.drawn === false)) && (
+          <p className="mt-2 text-xs text-slate">Some walls are described in words rather than drawn, to keep this page quick for a project this size.</p>
+        )}
         <details className="mt-3 text-sm">
           <summary className="cursor-pointer font-medium">What goes into it</summary>
           <ul className="mt-2 list-disc pl-5 text-slate">

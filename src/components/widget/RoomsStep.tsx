@@ -136,6 +136,12 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
           </fieldset>
         );
       })}
+      {/* About the project as a whole, e.g. too big for one online estimate. */}
+      {errors['project.rooms'] && (
+        <p className="field-error" role="alert">
+          {errors['project.rooms']}
+        </p>
+      )}
       {rooms.length < 20 && (
         <button type="button" className="button-quiet w-full" onClick={() => onChange([...rooms, newRoom(units, ROOM_NAMES[rooms.length % ROOM_NAMES.length])])}>
           Add another room

@@ -41,6 +41,8 @@ export type {
   MeasuredBy,
 } from './schemas.ts';
 export { validateProject, checkProject, parseRateBook } from './validate.ts';
+export { checkProjectSize, projectSize, PROJECT_LIMITS } from './project-size.ts';
+export type { ProjectSize, RoomSize, ProjectLimits } from './project-size.ts';
 export { takeoff, coversWall } from './takeoff.ts';
 export { priceRange } from './pricing.ts';
 export { estimate, estimateParsed } from './estimate.ts';

@@ -3,6 +3,7 @@ import { beadFeetPerTube, filletFeetPerTube, gallonsFor } from './coverage.ts';
 import type { Catalogue } from './schemas.ts';
 import { piecesPerSheet } from './sheet-layout.ts';
 import { stockPiecesNeeded } from './stock-cutting.ts';
+import { stockLengthsOf, type StockLength } from './stock-lengths.ts';
 import type { MaterialLine, RoomTakeoff } from './types.ts';
 import { formatArea, formatLength, type Units } from './units.ts';
 
@@ -10,8 +11,13 @@ import { formatArea, formatLength, type Units } from './units.ts';
 export interface CutRegistry {
   /** Rectangles per sheet id. */
   sheets: Map<string, Array<{ width: number; height: number }>>;
-  /** Cut lengths per board or moulding id. */
+  /** Cut lengths per board or moulding: under its id for its main length, `id@length` for a longer length. */
   lengths: Map<string, number[]>;
+}
+
+/** The registry key of a stock item bought in a given length. */
+export function lengthKey(stock: { id: string; length: number }, stockLength = stock.length): string {
+  return stockLength === stock.length ? stock.id : `${stock.id}@${stockLength}`;
 }
 
 const EPS = 1e-9;
@@ -64,23 +70,26 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
     });
   }
 
-  const stockLines = (items: Array<{ id: string; name: string; length: number; priceCents: number }>, prefix: string): void => {
+  const stockLines = (items: Array<{ id: string; name: string; length: number; priceCents: number; longerLengths?: StockLength[] }>, prefix: string): void => {
     for (const stock of items) {
-      const cuts = reg.lengths.get(stock.id);
-      if (!cuts || cuts.length === 0) continue;
-      const needed = stockPiecesNeeded(cuts, stock.length, catalogue.kerf);
-      const total = cuts.reduce((s, c) => s + c, 0);
-      lines.push({
-        id: `${prefix}:${stock.id}`,
-        label: stock.name,
-        quantity: withWaste(needed, waste),
-        unit: 'piece',
-        needed,
-        unitCents: stock.priceCents,
-        cuts: cuts.length,
-        stockLength: stock.length,
-        basis: `${plural(cuts.length, 'cut')} totalling ${len(total)} from ${len(stock.length)} lengths (saw kerf ${len(catalogue.kerf)}) = ${plural(needed, 'length')}${wasteText}`,
-      });
+      for (const bought of stockLengthsOf(stock)) {
+        const cuts = reg.lengths.get(lengthKey(stock, bought.length));
+        if (!cuts || cuts.length === 0) continue;
+        const main = bought.length === stock.length;
+        const needed = stockPiecesNeeded(cuts, bought.length, catalogue.kerf);
+        const total = cuts.reduce((s, c) => s + c, 0);
+        lines.push({
+          id: main ? `${prefix}:${stock.id}` : `${prefix}:${stock.id}@${bought.length}`,
+          label: main ? stock.name : `${stock.name}, in ${len(bought.length)} lengths`,
+          quantity: withWaste(needed, waste),
+          unit: 'piece',
+          needed,
+          unitCents: bought.priceCents,
+          cuts: cuts.length,
+          stockLength: bought.length,
+          basis: `${plural(cuts.length, 'cut')} totalling ${len(total)} from ${len(bought.length)} lengths (saw kerf ${len(catalogue.kerf)}) = ${plural(needed, 'length')}${wasteText}`,
+        });
+      }
     }
   };
   stockLines(catalogue.boards, 'board');

@@ -160,15 +160,32 @@ export const boardStockSchema = z
     return { ...b, width, thickness, faceWidth: b.faceWidth ?? width };
   });
 
-export const mouldingStockSchema = z.strictObject({
-  id: stockId('Moulding id'),
-  name: text('Moulding name', 80),
-  /** Face height of the moulding as it sits on the wall. */
-  width: inches('Moulding width', 0.5, 12),
-  thickness: inches('Moulding thickness', 0.125, 2),
-  length: inches('Stock length', 24, 240),
-  priceCents: cents('Moulding price'),
-});
+export const mouldingStockSchema = z
+  .strictObject({
+    id: stockId('Moulding id'),
+    name: text('Moulding name', 80),
+    /** Face height of the moulding as it sits on the wall. */
+    width: inches('Moulding width', 0.5, 12),
+    thickness: inches('Moulding thickness', 0.125, 2),
+    length: inches('Stock length', 24, 240),
+    priceCents: cents('Moulding price'),
+    /**
+     * The same profile sold in longer lengths, each at its own price. A cut longer than `length` comes
+     * from the shortest of these that fits; one longer than all of them is joined.
+     */
+    longerLengths: z
+      .array(z.strictObject({ length: inches('Longer stock length', 24, 240), priceCents: cents('Longer stock price') }), { error: 'Longer lengths must be a list.' })
+      .max(5, { error: 'At most 5 longer lengths per moulding.' })
+      .default([]),
+  })
+  .superRefine((m, ctx) => {
+    const seen = new Set<number>([m.length]);
+    m.longerLengths.forEach((l, i) => {
+      if (l.length <= m.length) ctx.addIssue({ code: 'custom', path: ['longerLengths', i, 'length'], message: 'A longer length must be longer than the stock length.' });
+      else if (seen.has(l.length)) ctx.addIssue({ code: 'custom', path: ['longerLengths', i, 'length'], message: 'This length is listed twice.' });
+      seen.add(l.length);
+    });
+  });
 
 const tubeSchema = (label: string) =>
   z.strictObject({

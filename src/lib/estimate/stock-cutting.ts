@@ -2,14 +2,18 @@
  * One-dimensional cutting: how many stock lengths (boards, mouldings, strips) yield a list of cuts.
  * Up to EXACT_LIMIT cuts: exact, by branch and bound. Beyond: the better of first-fit decreasing
  * (proven: FFD ≤ 11/9·OPT + 6/9, Dósa 2007) and a sequential pattern heuristic (repeat the pattern
- * that wastes least, after Haessler's sequential heuristic procedure) — both feasible, so the
- * answer is never below the true optimum and never worse than FFD.
+ * that wastes least, after Haessler's sequential heuristic procedure, within a node budget) — both
+ * feasible, so the answer is never below the true optimum and never worse than FFD.
  */
 
 export const EXACT_LIMIT = 20;
 const EPS = 1e-7;
 // Node cap for the exact search; reached only by adversarial input, and then FFD's answer stands.
 const MAX_NODES = 2_000_000;
+// Node cap for one pattern of the sequential heuristic, and for all its patterns together: a list of
+// many thousands of different lengths would otherwise take seconds; past it, FFD's answer stands.
+const PATTERN_NODES = 20_000;
+const SEQUENTIAL_NODES = 500_000;
 
 function check(cuts: number[], stockLength: number, kerf: number): void {
   if (!(Number.isFinite(stockLength) && stockLength > 0)) throw new RangeError('stockPiecesNeeded: stockLength must be a positive number of inches');
@@ -20,26 +24,28 @@ function check(cuts: number[], stockLength: number, kerf: number): void {
   }
 }
 
-/** First-fit decreasing on kerf-grown sizes; returns the bins as lists of indexes into `sizes`. */
+/**
+ * First-fit decreasing on kerf-grown sizes; returns the bins as lists of indexes into `sizes`.
+ * The leftmost bin with room is found in a max-tree over the bins' room (O(n log n) rather than a
+ * scan of every open bin): bins not yet opened hold a whole stock length and sit right of every
+ * open one, so the leftmost bin that fits is exactly the one plain first fit would pick.
+ */
 function firstFitDecreasing(sizes: number[], cap: number): number[][] {
   const order = sizes.map((_, i) => i).sort((a, b) => sizes[b]! - sizes[a]!);
-  const room: number[] = [];
+  let leaves = 1;
+  while (leaves < sizes.length) leaves *= 2;
+  // tree[1] is the root; leaf b sits at tree[leaves + b]; each node holds the most room below it.
+  const tree = new Float64Array(2 * leaves).fill(cap);
   const bins: number[][] = [];
   for (const i of order) {
     const s = sizes[i]!;
-    let placed = false;
-    for (let b = 0; b < room.length; b++) {
-      if (room[b]! + EPS >= s) {
-        room[b] = room[b]! - s;
-        bins[b]!.push(i);
-        placed = true;
-        break;
-      }
-    }
-    if (!placed) {
-      room.push(cap - s);
-      bins.push([i]);
-    }
+    let node = 1;
+    while (node < leaves) node = tree[2 * node]! + EPS >= s ? 2 * node : 2 * node + 1;
+    const b = node - leaves;
+    if (b === bins.length) bins.push([]);
+    bins[b]!.push(i);
+    tree[node] = tree[node]! - s;
+    for (node >>= 1; node >= 1; node >>= 1) tree[node] = Math.max(tree[2 * node]!, tree[2 * node + 1]!);
   }
   return bins;
 }
@@ -100,7 +106,7 @@ function exactBins(sizes: number[], cap: number, upper: number): number[][] | nu
 }
 
 /** Best single pattern for the sequential heuristic: the subset of remaining cuts that fills one stock most. */
-function bestPattern(lengths: number[], remaining: number[], cap: number): number[] {
+function bestPattern(lengths: number[], remaining: number[], cap: number, budget: { nodes: number }): number[] {
   const n = lengths.length;
   // suffix[i]: total length of every remaining cut from group i on (an upper bound on what they add).
   const suffix = new Array<number>(n + 1).fill(0);
@@ -110,7 +116,8 @@ function bestPattern(lengths: number[], remaining: number[], cap: number): numbe
   const cur = new Array<number>(n).fill(0);
   let nodes = 0;
   const dfs = (i: number, fill: number): void => {
-    if (++nodes > 20_000) return;
+    if (++nodes > PATTERN_NODES) return;
+    budget.nodes -= 1;
     if (fill > bestFill + EPS) {
       bestFill = fill;
       best = cur.slice();
@@ -129,6 +136,7 @@ function bestPattern(lengths: number[], remaining: number[], cap: number): numbe
   return best;
 }
 
+/** Stock lengths the sequential heuristic uses; Infinity when it ran out of its node budget. */
 function sequentialPatterns(sizes: number[], cap: number): number {
   const groups = new Map<number, number>();
   for (const s of sizes) {
@@ -137,9 +145,12 @@ function sequentialPatterns(sizes: number[], cap: number): number {
   }
   const lengths = [...groups.keys()].sort((a, b) => b - a);
   const remaining = lengths.map((l) => groups.get(l)!);
+  const budget = { nodes: SEQUENTIAL_NODES };
+  let left = sizes.length;
   let used = 0;
-  while (remaining.some((r) => r > 0)) {
-    const pattern = bestPattern(lengths, remaining, cap);
+  while (left > 0) {
+    if (budget.nodes <= 0) return Infinity;
+    const pattern = bestPattern(lengths, remaining, cap, budget);
     // Use the pattern as often as the remaining demand allows.
     let times = Infinity;
     pattern.forEach((c, i) => {
@@ -148,6 +159,7 @@ function sequentialPatterns(sizes: number[], cap: number): number {
     if (!Number.isFinite(times) || times < 1) times = 1;
     pattern.forEach((c, i) => {
       remaining[i] = remaining[i]! - c * times;
+      left -= c * times;
     });
     used += times;
   }

@@ -5,11 +5,16 @@
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
 import { overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
-import { materialsFor, type CutRegistry } from './materials.ts';
+import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
 import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
+import { stockCutFor, stockLengthsOf } from './stock-lengths.ts';
 import { formatLength, type Units } from './units.ts';
+import { checkProjectSize } from './project-size.ts';
 import { validateProject } from './validate.ts';
+import { bandTopFor, wallLength } from './wall-band.ts';
+
+export { bandTopFor, wallLength };
 
 const MIN_PIECE = 0.5; // pieces shorter than half an inch are not cut
 
@@ -25,18 +30,6 @@ export function coversWall(t: Treatment): boolean {
     case 'picture-frame':
       return false;
   }
-}
-
-/** Top of the covered band: the wainscot height (one third of the ceiling when not given) or the ceiling. */
-export function bandTopFor(room: Room): number {
-  if (room.treatment.height === 'full') return room.ceilingHeight;
-  // Source: TRADE.md §8 — rule of thirds, cap at about one third of the wall height (This Old House).
-  return room.treatment.wainscotHeight ?? Math.round(room.ceilingHeight / 3);
-}
-
-export function wallLength(room: Room, wall: Wall): number {
-  if (wall.length !== undefined) return wall.length;
-  return wall.side === 'width' ? room.width! : room.length!;
 }
 
 /** Splits a run longer than `max` into full lengths and a remainder. */
@@ -80,6 +73,8 @@ interface WallContext {
   catalogue: Catalogue;
   trimFeet: number;
   caulkFeet: number;
+  /** Scarf joints where a run is longer than any stock length. */
+  joints: number;
 }
 
 /** Vertical stretches of the band in the column [x0, x1] that no opening interrupts. */
@@ -231,6 +226,7 @@ function layRail(ctx: WallContext, board: BoardStock, y: number): void {
 
 function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-frame' }>, rows: number): WallTakeoff['frames'] {
   const moulding = ctx.catalogue.mouldings.find((m) => m.id === t.mouldingId)!;
+  const lengths = stockLengthsOf(moulding);
   const m = t.margin;
   const bottom = ctx.bandBottom + m;
   const top = ctx.bandTop - m;
@@ -246,7 +242,9 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
   let widthSum = 0;
   for (const [a, b] of subtractIntervals([m, ctx.length - m], blocked, minSide)) {
     const s = b - a;
-    const n = Math.max(1, Math.round((s + t.frameGap) / (t.targetFrameWidth + t.frameGap)));
+    // As near the target width as the stretch allows, but never so many that a frame is narrower than minSide.
+    const most = Math.max(1, Math.floor((s + t.frameGap) / (minSide + t.frameGap) + 1e-9));
+    const n = Math.min(most, Math.max(1, Math.round((s + t.frameGap) / (t.targetFrameWidth + t.frameGap))));
     const fw = (s - (n - 1) * t.frameGap) / n;
     for (let i = 0; i < n; i++) {
       for (let r = 0; r < rows; r++) {
@@ -254,7 +252,12 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
         const y = bottom + r * (fh + t.frameGap);
         ctx.pieces.push({ role: 'frame', x, y, width: fw, height: fh });
         // Source: TRADE.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
-        addCuts(ctx.reg.lengths, moulding.id, [fw, fw, fh, fh]);
+        for (const side of [fw, fw, fh, fh]) {
+          // A side longer than the moulding comes from a longer length the firm lists, or is joined.
+          const cut = stockCutFor(lengths, side, moulding.thickness);
+          addCuts(ctx.reg.lengths, lengthKey(moulding, cut.stockLength), cut.pieces);
+          ctx.joints += cut.joints;
+        }
         ctx.trimFeet += (2 * (fw + fh)) / 12;
         ctx.caulkFeet += (4 * (fw + fh)) / 12; // outer and inner edges
         count += 1;
@@ -296,7 +299,7 @@ function wallTakeoff(
     (s, o) => s + overlap(o.offset, o.offset + o.width, 0, length) * overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop),
     0,
   );
-  const ctx: WallContext = { length, bandBottom, bandTop, openings, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0 };
+  const ctx: WallContext = { length, bandBottom, bandTop, openings, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
   const notes: string[] = [];
   const label = wall.label ?? `Wall ${index + 1}`;
   let boards: BoardLayout | undefined;
@@ -364,6 +367,11 @@ function wallTakeoff(
   }
   if (boards && boards.leftover > 0) {
     notes.push(`${label} ends ${formatLength(boards.leftover, units)} short of a full gap; the corner trim hides it.`);
+  }
+  if (ctx.joints > 0) {
+    const moulding = t.kind === 'picture-frame' ? catalogue.mouldings.find((x) => x.id === t.mouldingId) : undefined;
+    const longest = moulding ? Math.max(...stockLengthsOf(moulding).map((l) => l.length)) : 0;
+    notes.push(`Some frame sides on ${label} are longer than the longest moulding (${formatLength(longest, units)}), so they are joined: ${ctx.joints === 1 ? 'one scarf joint' : `${ctx.joints} scarf joints`}.`);
   }
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;
@@ -479,8 +487,10 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
 
 /**
  * The takeoff of a project against a catalogue: validates the project (throws EstimateInputError
- * with field paths), then works out every wall and room and the materials list.
+ * with field paths) and its size, then works out every wall and room and the materials list.
  */
 export function takeoff(project: unknown, catalogue: Catalogue, units: Units = 'imperial'): Takeoff {
-  return takeoffOf(validateProject(project, catalogue), catalogue, units);
+  const p = validateProject(project, catalogue);
+  checkProjectSize(p, catalogue);
+  return takeoffOf(p, catalogue, units);
 }

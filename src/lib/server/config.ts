@@ -12,6 +12,14 @@ function optional(name: string, fallback: string): string {
   return process.env[name] || fallback;
 }
 
+function positiveInteger(name: string, fallback: number): number {
+  const value = process.env[name];
+  if (!value) return fallback;
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 1) throw new Error(`${name} must be a whole number of at least 1.`);
+  return n;
+}
+
 export const config = {
   /** PostgreSQL connection string of the app database. */
   get databaseUrl() {
@@ -48,6 +56,14 @@ export const config = {
   },
   get mailFrom() {
     return optional('MAIL_FROM', 'Lapwing <no-reply@lapwing.test>');
+  },
+  /** Worker threads that work out estimates (ESTIMATE_THREADS, default 2). */
+  get estimateThreads() {
+    return positiveInteger('ESTIMATE_THREADS', 2);
+  },
+  /** Longest one estimate may take, waiting for a thread included, in ms (ESTIMATE_TIME_LIMIT_MS, default 5000). */
+  get estimateTimeLimitMs() {
+    return positiveInteger('ESTIMATE_TIME_LIMIT_MS', 5000);
   },
   /** Folder where the local SMTP stand-in keeps received messages (development only). */
   get devMailDir() {

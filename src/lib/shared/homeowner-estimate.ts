@@ -1,6 +1,12 @@
 import type { Caution, WallTakeoff } from '~/lib/estimate/index.ts';
 
 /**
+ * A wall as the homeowner's view carries it: its takeoff with the pieces its drawing needs, or,
+ * past the answer's drawing budget, none (`drawn: false`: the wall is described in words instead).
+ */
+export type HomeownerWall = WallTakeoff & { drawn: boolean };
+
+/**
  * What a homeowner sees of an estimate. The firm's unit rates (price per sheet, labour rate, markup)
  * stay on the server: the homeowner gets the range, group totals, quantities, drawings and cautions.
  */
@@ -15,7 +21,7 @@ export type HomeownerEstimate = {
   /** How the middle of the range adds up. */
   groups: { id: 'materials' | 'labour' | 'extras' | 'tax'; label: string; cents: number }[];
   extras: string[];
-  rooms: { name: string; treatmentName: string; height: 'wainscot' | 'full'; netSqFt: number; walls: WallTakeoff[] }[];
+  rooms: { name: string; treatmentName: string; height: 'wainscot' | 'full'; netSqFt: number; walls: HomeownerWall[] }[];
   materials: { label: string; quantity: number; unit: string }[];
   cautions: Caution[];
   notes: string[];

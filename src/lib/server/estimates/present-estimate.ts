@@ -1,11 +1,58 @@
-import type { Estimate } from '~/lib/estimate';
-import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
+import type { Estimate, WallPiece, WallTakeoff } from '~/lib/estimate';
+import type { HomeownerEstimate, HomeownerWall } from '~/lib/shared/homeowner-estimate';
 
 export type { HomeownerEstimate };
 
+/**
+ * Pieces drawn in one answer, every wall together: an ordinary large house (8 rooms of 6 walls in
+ * every treatment) takes about 1,100 once butted boards are merged, and 4,000 pieces are about 250 KB
+ * of JSON (common practice, no source). Walls past the budget are described in words instead.
+ */
+export const DRAWN_PIECES_BUDGET = 4000;
+
+const r3 = (x: number): number => Math.round(x * 1000) / 1000;
+
+/**
+ * The pieces a drawing needs: boards and strips butted end to end in one course are drawn without
+ * an outline (WallDrawing), so they become one rectangle; coordinates to a thousandth of an inch,
+ * the precision the drawing uses.
+ */
+export function drawingPieces(pieces: WallPiece[]): WallPiece[] {
+  const out: WallPiece[] = [];
+  for (const p of pieces) {
+    const last = out.at(-1);
+    const butted =
+      last !== undefined &&
+      (p.role === 'board' || p.role === 'strip') &&
+      last.role === p.role &&
+      (last.ripped ?? false) === (p.ripped ?? false) &&
+      Math.abs(last.y - p.y) < 1e-6 &&
+      Math.abs(last.height - p.height) < 1e-6 &&
+      Math.abs(last.x + last.width - p.x) < 1e-6;
+    if (butted) last.width = r3(last.width + p.width);
+    else out.push({ ...p, x: r3(p.x), y: r3(p.y), width: r3(p.width), height: r3(p.height), ...(p.ripped ? { ripped: true } : {}) });
+  }
+  for (const p of out) if (!p.ripped) delete p.ripped;
+  return out;
+}
+
+/** Each wall with its drawing while the budget lasts; the rest with no pieces and `drawn: false`. */
+function wallsForDrawing(rooms: Estimate['takeoff']['rooms'], budget: number): HomeownerWall[][] {
+  let left = budget;
+  return rooms.map((room) =>
+    room.walls.map((wall: WallTakeoff): HomeownerWall => {
+      const pieces = drawingPieces(wall.pieces);
+      const drawn = pieces.length <= left;
+      if (drawn) left -= pieces.length;
+      return { ...wall, pieces: drawn ? pieces : [], drawn };
+    }),
+  );
+}
+
 /** What a homeowner sees of an estimate: the firm's unit rates stay on the server. */
-export function presentForHomeowner(result: Estimate): HomeownerEstimate {
+export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_PIECES_BUDGET): HomeownerEstimate {
   const { takeoff, price } = result;
+  const walls = wallsForDrawing(takeoff.rooms, drawnPiecesBudget);
   const groups: HomeownerEstimate['groups'] = [
     { id: 'materials', label: 'Materials and supplies', cents: price.materialsCents + price.markupCents },
     { id: 'labour', label: `Installation${takeoff.facts.paint ? ' and painting' : ''}`, cents: price.labourCents },
@@ -21,12 +68,12 @@ export function presentForHomeowner(result: Estimate): HomeownerEstimate {
     minimumApplied: price.minimumApplied,
     groups: groups.filter((g) => g.cents > 0),
     extras: price.lines.filter((l) => l.group === 'extras').map((l) => l.label),
-    rooms: takeoff.rooms.map((room) => ({
+    rooms: takeoff.rooms.map((room, r) => ({
       name: room.name,
       treatmentName: room.treatmentName,
       height: room.height,
       netSqFt: room.netSqFt,
-      walls: room.walls,
+      walls: walls[r]!,
     })),
     materials: takeoff.materials.map((m) => ({ label: m.label, quantity: m.quantity, unit: m.unit })),
     cautions: takeoff.cautions,

@@ -1,0 +1,80 @@
+import { renderToStaticMarkup } from 'react-dom/server';
+import { createElement } from 'react';
+import { describe, expect, it } from 'vitest';
+import { WallDrawing } from '../../../components/drawing/WallDrawing';
+import { estimate, parseRateBook, sampleRateBook, type WallPiece } from '~/lib/estimate';
+import { biggestAcceptedProject, largeHouse } from '~/lib/estimate/sample-big-projects';
+import { DRAWN_PIECES_BUDGET, drawingPieces, presentForHomeowner } from './present-estimate';
+
+const rateBook = parseRateBook(sampleRateBook());
+const run = (p: unknown) => estimate(p, rateBook);
+const areaByRole = (pieces: WallPiece[]) => {
+  const out: Record<string, number> = {};
+  for (const p of pieces) out[p.role] = (out[p.role] ?? 0) + p.width * p.height;
+  return out;
+};
+
+describe("the homeowner's view is sized to what the widget shows", () => {
+  it('draws every wall of an ordinary large house, covering the same area with fewer pieces', () => {
+    const e = run(largeHouse());
+    const view = presentForHomeowner(e);
+    e.takeoff.rooms.forEach((room, r) =>
+      room.walls.forEach((wall, w) => {
+        const shown = view.rooms[r]!.walls[w]!;
+        expect(shown.drawn).toBe(true);
+        expect(shown.pieces.length).toBeLessThanOrEqual(wall.pieces.length);
+        const before = areaByRole(wall.pieces);
+        const after = areaByRole(shown.pieces);
+        for (const role of Object.keys(before)) expect(after[role]).toBeCloseTo(before[role]!, 1);
+      }),
+    );
+  });
+
+  it('merges boards butted end to end in a course, and keeps the ripped one and the breaks at openings', () => {
+    const pieces: WallPiece[] = [
+      { role: 'board', x: 0, y: 5.25, width: 96, height: 5.125 },
+      { role: 'board', x: 96, y: 5.25, width: 24.000000001, height: 5.125 },
+      { role: 'board', x: 150, y: 5.25, width: 30, height: 5.125 },
+      { role: 'board', x: 0, y: 10.5, width: 96, height: 2.1, ripped: true },
+      { role: 'board', x: 96, y: 10.5, width: 84, height: 2.1, ripped: true },
+      { role: 'batten', x: 0, y: 5.25, width: 2.5, height: 30 },
+      { role: 'batten', x: 0, y: 35.25, width: 2.5, height: 30 },
+    ];
+    expect(drawingPieces(pieces)).toEqual([
+      { role: 'board', x: 0, y: 5.25, width: 120, height: 5.125 },
+      { role: 'board', x: 150, y: 5.25, width: 30, height: 5.125 },
+      { role: 'board', x: 0, y: 10.5, width: 180, height: 2.1, ripped: true },
+      // Battens are outlined in the drawing, so their joints show and stay.
+      { role: 'batten', x: 0, y: 5.25, width: 2.5, height: 30 },
+      { role: 'batten', x: 0, y: 35.25, width: 2.5, height: 30 },
+    ]);
+  });
+
+  it('draws the same wall from the merged pieces', () => {
+    const e = run(largeHouse());
+    const wall = e.takeoff.rooms[0]!.walls[0]!; // horizontal shiplap, full height
+    const shown = presentForHomeowner(e).rooms[0]!.walls[0]!;
+    const svg = (w: typeof wall) => renderToStaticMarkup(createElement(WallDrawing, { wall: w, units: 'imperial' }));
+    const boardsBefore = wall.pieces.filter((p) => p.role === 'board').length;
+    const boardsAfter = shown.pieces.filter((p) => p.role === 'board').length;
+    expect(boardsAfter).toBeLessThan(boardsBefore);
+    // Everything but the board rectangles is drawn alike.
+    const strip = (html: string) => html.replace(/<rect data-role="board"[^>]*><\/rect>/g, '');
+    expect(strip(svg(shown))).toBe(strip(svg(wall)));
+  });
+
+  it('keeps a huge project’s answer to a few hundred KB: drawings while the budget lasts, then walls in words', () => {
+    const e = run(biggestAcceptedProject());
+    const view = presentForHomeowner(e);
+    const walls = view.rooms.flatMap((r) => r.walls);
+    const drawnPieces = walls.reduce((s, w) => s + w.pieces.length, 0);
+    expect(drawnPieces).toBeLessThanOrEqual(DRAWN_PIECES_BUDGET);
+    expect(walls[0]!.drawn).toBe(true);
+    const words = walls.filter((w) => !w.drawn);
+    expect(words.length).toBeGreaterThan(0);
+    for (const w of words) expect(w.pieces).toEqual([]);
+    // The drawn walls come first, in the order the homeowner listed them.
+    expect(walls.findIndex((w) => !w.drawn)).toBe(walls.length - words.length);
+    expect(JSON.stringify({ estimate: view }).length).toBeLessThan(450_000);
+  });
+});
