@@ -6,6 +6,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { csrf } from '~/lib/server/auth/csrf';
 import { session } from '~/lib/server/auth/session-middleware';
 import { staffArea } from '~/lib/server/auth/staff-area';
+import { canonicalPaths } from '~/lib/server/auth/canonical-path';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
@@ -40,5 +41,6 @@ const securityHeaders = defineMiddleware(async (context, next) => {
   return response;
 });
 
-// Order matters: refuse cross-site writes before any work, then find the session, then guard /app.
-export const onRequest = sequence(requestContext, securityHeaders, csrf, session, staffArea);
+// Order matters: refuse other spellings of a path before any guard reads it, then cross-site writes,
+// then find the session, then guard /app.
+export const onRequest = sequence(requestContext, securityHeaders, canonicalPaths, csrf, session, staffArea);
