@@ -15,6 +15,12 @@ export default defineConfig({
   // Without a trusted host list Astro 5 sees every request as http://localhost, and its own
   // origin check then refuses same-origin form posts.
   security: { allowedDomains: [{ hostname: '127.0.0.1' }, { hostname: 'localhost' }] },
+  // A Content-Security-Policy header on every rendered page: script-src and style-src list the hash
+  // of each script and style Astro emits (the islands' inline bootstrap included), so no other inline
+  // script runs. src/middleware.ts adds frame-ancestors (src/lib/server/security-headers.ts).
+  experimental: {
+    csp: { directives: ["object-src 'none'", "base-uri 'self'", "form-action 'self'"] },
+  },
   vite: {
     // piscina starts its threads from its own files, so it stays outside the bundle.
     ssr: { external: ['@node-rs/argon2', 'sharp', 'piscina'] },

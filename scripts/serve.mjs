@@ -14,8 +14,19 @@ const host = process.env.HOST || '127.0.0.1';
 const port = Number(process.env.PORT || 4321);
 const trustProxy = process.env.TRUST_PROXY === 'true';
 
+// Built files (dist/client, /widget.js) are answered by the adapter before Astro's middleware runs,
+// so they get their headers here: nothing in them may load anything when opened on their own, and
+// none may be framed. Rendered pages and API answers replace these with their own (src/middleware.ts,
+// src/lib/server/security-headers.ts), since headers a response writes win over ones set before.
+const fileHeaders = [
+  ['X-Content-Type-Options', 'nosniff'],
+  ['Content-Security-Policy', "default-src 'none'; frame-ancestors 'none'"],
+  ...((process.env.PUBLIC_ORIGIN ?? '').startsWith('https://') ? [['Strict-Transport-Security', 'max-age=31536000; includeSubDomains']] : []),
+];
+
 const server = http.createServer((req, res) => {
   if (!trustProxy) delete req.headers['x-forwarded-for'];
+  for (const [name, value] of fileHeaders) res.setHeader(name, value);
   handler(req, res);
 });
 server.listen(port, host, () => {

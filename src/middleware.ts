@@ -6,6 +6,9 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { csrf } from '~/lib/server/auth/csrf';
 import { session } from '~/lib/server/auth/session-middleware';
 import { staffArea } from '~/lib/server/auth/staff-area';
+import { canonicalPaths } from '~/lib/server/auth/canonical-path';
+import { config } from '~/lib/server/config';
+import { STRICT_TRANSPORT_SECURITY, completePolicy, mayBeFramed, mustNotBeStored } from '~/lib/server/security-headers';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
@@ -17,7 +20,7 @@ const requestContext = defineMiddleware(async (context, next) => {
   });
 });
 
-/** Headers every response gets. Only the widget's embed pages may be framed (they set their own). */
+/** Headers every response gets (see security-headers.ts). Only the widget's embed pages may be framed. */
 const securityHeaders = defineMiddleware(async (context, next) => {
   let response = await next();
   try {
@@ -28,17 +31,18 @@ const securityHeaders = defineMiddleware(async (context, next) => {
   }
   const headers = response.headers;
   headers.set('X-Content-Type-Options', 'nosniff');
-  headers.set('Referrer-Policy', 'strict-origin-when-cross-origin');
+  // A page may ask for a stricter one (the homeowner's private link sends none at all).
+  if (!headers.has('Referrer-Policy')) headers.set('Referrer-Policy', 'strict-origin-when-cross-origin');
   headers.set('Permissions-Policy', 'camera=(), microphone=(), geolocation=()');
-  if (!headers.has('Content-Security-Policy')) {
-    headers.set('Content-Security-Policy', "frame-ancestors 'none'; object-src 'none'; base-uri 'self'");
-    headers.set('X-Frame-Options', 'DENY');
-  }
-  if (context.url.pathname.startsWith('/app') || context.url.pathname.startsWith('/api/')) {
-    headers.set('Cache-Control', 'no-store');
-  }
+  const html = (headers.get('Content-Type') ?? '').startsWith('text/html');
+  const policy = completePolicy(headers.get('Content-Security-Policy'), { html, dev: import.meta.env.DEV });
+  headers.set('Content-Security-Policy', policy);
+  if (!mayBeFramed(policy)) headers.set('X-Frame-Options', 'DENY');
+  if (config.servedOverHttps) headers.set('Strict-Transport-Security', STRICT_TRANSPORT_SECURITY);
+  if (mustNotBeStored(context.url.pathname)) headers.set('Cache-Control', 'no-store');
   return response;
 });
 
-// Order matters: refuse cross-site writes before any work, then find the session, then guard /app.
-export const onRequest = sequence(requestContext, securityHeaders, csrf, session, staffArea);
+// Order matters: refuse other spellings of a path before any guard reads it, then cross-site writes,
+// then find the session, then guard /app.
+export const onRequest = sequence(requestContext, securityHeaders, canonicalPaths, csrf, session, staffArea);

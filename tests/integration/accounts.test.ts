@@ -1,4 +1,5 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { afterAll, beforeAll, describe, expect, test, vi } from 'vitest';
+import pg from 'pg';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import { getOrm } from '../../src/lib/server/boot/orm';
 import { deliverDueMail } from '../../src/lib/server/mail/outbox';
@@ -18,6 +19,7 @@ import { acceptInvite, LINK_PROBLEMS, readInvite } from '../../src/lib/server/te
 import { changeRole, inviteToTeam, listTeam, removeMember } from '../../src/lib/server/team/team.service';
 import { Conflict, InvalidInput, NotFound, TooManyRequests } from '../../src/lib/server/errors';
 import { ACCOUNT_LIMIT } from '../../src/lib/server/auth/sign-in-throttle';
+import { afterResponseSettled } from '../../src/lib/server/after-response';
 import { mailTo, waitForMail } from '../helpers/mailbox';
 import { buildFirm, linkToken } from '../helpers/accounts';
 
@@ -238,6 +240,7 @@ describe('password reset', () => {
     const [abe] = members;
     const session = await startSession(abe.user.id, company.id);
     await requestPasswordReset(em(), { email: abe.email, address: anAddress() });
+    await afterResponseSettled();
     await deliverDueMail(em());
     const mail = await waitForMail({ to: abe.email, subject: 'Choose a new Lapwing password' });
     const token = linkToken(mail.text, 'reset');
@@ -254,15 +257,50 @@ describe('password reset', () => {
   test('an unknown address gets the same quiet answer and no e-mail; an expired link is refused', async () => {
     const nobody = `nobody-${Date.now()}@firm.test`;
     await expect(requestPasswordReset(em(), { email: nobody, address: anAddress() })).resolves.toBeUndefined();
+    await afterResponseSettled();
     await deliverDueMail(em());
     expect(await mailTo(nobody)).toEqual([]);
 
     const { members } = await buildFirm(em(), [{ name: 'Bea', role: 'owner' }]);
     await requestPasswordReset(em(), { email: members[0].email, address: anAddress() });
+    await afterResponseSettled();
     await deliverDueMail(em());
     const token = linkToken((await waitForMail({ to: members[0].email })).text, 'reset');
     await em().nativeUpdate(PasswordReset, { user: members[0].user.id }, { expiresAt: new Date(Date.now() - 1000) });
     expect(await readPasswordReset(em(), token)).toBe('expired');
     await expect(completePasswordReset(em(), token, 'a long new password')).rejects.toThrow(RESET_PROBLEMS.expired);
+  });
+
+  test('the answer does the same database work for an address with an account as for one without', async () => {
+    const { members } = await buildFirm(em(), [{ name: 'Cal', role: 'owner' }]);
+    const address = anAddress();
+    // Every statement any pool of this process sends, as text (the values differ, the statements must not).
+    const statementsDuring = async (work: () => Promise<unknown>): Promise<string[]> => {
+      const spy = vi.spyOn(pg.Client.prototype, 'query');
+      try {
+        await work();
+        return spy.mock.calls.map(([statement]) => (typeof statement === 'string' ? statement : (statement as { text: string }).text));
+      } finally {
+        spy.mockRestore();
+      }
+    };
+    // Warm the pools and limiters first, so neither measured request pays for opening them.
+    // Each request's later work is let finish before the next is recorded, so it cannot blur them.
+    await requestPasswordReset(em(), { email: `warm-up-${Date.now()}@firm.test`, address });
+    await afterResponseSettled();
+    const known = await statementsDuring(() => requestPasswordReset(em(), { email: members[0].email, address }));
+    await afterResponseSettled();
+    const unknown = await statementsDuring(() => requestPasswordReset(em(), { email: `nobody-${Date.now()}@firm.test`, address }));
+    // Timing cannot tell the two apart when the work done before answering is the same statement for
+    // statement. Source: OWASP Forgot Password Cheat Sheet ("consistent response time" for existing
+    // and non-existing accounts).
+    expect(known).toEqual(unknown);
+    expect(known.join('\n')).not.toMatch(/app_user|password_reset|mail_outbox/);
+
+    // The work itself still happens, after the answer: a link for the account, nothing for the other.
+    await afterResponseSettled();
+    expect(await em().count(PasswordReset, { user: members[0].user.id })).toBe(1);
+    await deliverDueMail(em());
+    expect((await waitForMail({ to: members[0].email, subject: 'Choose a new Lapwing password' })).text).toContain('/reset/');
   });
 });

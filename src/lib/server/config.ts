@@ -33,6 +33,10 @@ export const config = {
   get secureCookies() {
     return this.publicOrigin.startsWith('https://');
   },
+  /** Browsers are told to use only HTTPS for this host (Strict-Transport-Security) when it is served over it. */
+  get servedOverHttps() {
+    return this.publicOrigin.startsWith('https://');
+  },
   /** Secret for signing tokens (form tokens, invite links). At least 32 characters. */
   get appSecret() {
     const secret = required('APP_SECRET');
