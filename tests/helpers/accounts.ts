@@ -6,9 +6,9 @@ import { hashPassword } from '../../src/lib/server/users/password';
 import { User } from '../../src/lib/server/users/user.entity';
 
 /** A firm of its own for one test file, so tests running side by side never share rows. */
-export async function buildFirm(em: EntityManager, people: { name: string; role: Role; password?: string }[]) {
+export async function buildFirm(em: EntityManager, people: { name: string; role: Role; password?: string }[], firm: { timeZone?: string } = {}) {
   const tag = randomBytes(4).toString('hex');
-  const company = em.create(Company, { slug: `test-${tag}`, name: `Test Firm ${tag}` });
+  const company = em.create(Company, { slug: `test-${tag}`, name: `Test Firm ${tag}`, ...(firm.timeZone ? { timeZone: firm.timeZone } : {}) });
   const members: { user: User; membership: Membership; email: string; password: string }[] = [];
   for (const person of people) {
     const email = `${person.name.toLowerCase()}-${tag}@firm.test`;

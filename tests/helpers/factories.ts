@@ -26,13 +26,16 @@ export function buildRateBookVersion(
   });
 }
 
-/** A lead of a firm with the sample project priced by the sample rate book. Flush to store it. */
+/**
+ * A lead of a firm with the sample project priced by the sample rate book (or `rates`, e.g. a
+ * metric one). Flush to store it.
+ */
 export function buildLead(
   em: EntityManager,
   companyId: string,
-  overrides: Partial<Pick<Lead, 'name' | 'email' | 'draftId' | 'createdAt'>> & { rateBookVersion?: RateBookVersion } = {},
+  overrides: Partial<Pick<Lead, 'name' | 'email' | 'draftId' | 'createdAt'>> & { rateBookVersion?: RateBookVersion; rates?: RateBookInput } = {},
 ): Lead {
-  const rates = sampleRateBook();
+  const rates = overrides.rates ?? sampleRateBook();
   const project = sampleProject();
   const result = estimate(project, rates);
   const version = overrides.rateBookVersion ?? buildRateBookVersion(em, companyId, { rates });

@@ -1,25 +1,47 @@
-import { Forbidden, Unauthenticated } from '../errors';
-import type { Role } from '../users/membership.entity';
+import { Forbidden, NotFound, Unauthenticated } from '../errors';
+import type { FirmScoped, ObjectPolicy, Viewer } from '../viewer';
 import type { ActiveMembership, SignedInUser } from './types';
 
 /** Who is asking, in which firm, as what. Every staff page and staff API route starts from this. */
-export type Staff = {
+export type Staff = Viewer & {
   user: SignedInUser;
   membership: ActiveMembership;
-  companyId: string;
-  role: Role;
   sessionToken: string;
 };
 
+/** A policy about the viewer alone (`canManageTeam`, `canUseSetup`, …), for the guard's `may`. */
+export type ViewerPolicy = (viewer: Viewer) => boolean;
+
 /**
  * The one guard of the staff area. Throws Unauthenticated when no one is signed in to a firm and
- * Forbidden when `role` is given and the person's role in the active firm is another.
+ * Forbidden when the policy `may` refuses the person as they are in the active firm.
  * (Pages: the staff-area middleware turns these into a sign-in redirect or the "not allowed" page.
  * API routes: `staffEndpoint` turns them into 401/403 JSON.)
+ *
+ *   const staff = requireStaff(Astro.locals, { may: canManageTeam });
  */
-export function requireStaff(locals: App.Locals, options: { role?: Role } = {}): Staff {
+export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy } = {}): Staff {
   const { user, membership, session } = locals;
   if (!user || !membership || !session) throw new Unauthenticated();
-  if (options.role && membership.role !== options.role) throw new Forbidden('Only the firm’s owner can do this.');
-  return { user, membership, companyId: membership.companyId, role: membership.role, sessionToken: session.token };
+  const staff: Staff = {
+    user,
+    membership,
+    userId: user.id,
+    companyId: membership.companyId,
+    role: membership.role,
+    sessionToken: session.token,
+  };
+  if (options.may && !options.may(staff)) throw new Forbidden();
+  return staff;
+}
+
+/**
+ * Checks a policy about one object. Another firm's object is NotFound, so its id is not confirmed;
+ * one of the firm's own that the role may not touch is Forbidden.
+ *
+ *   authorize(staff, canSeeLead, lead);
+ */
+export function authorize<T extends FirmScoped>(viewer: Viewer, policy: ObjectPolicy<T>, target: T): void {
+  if (target.company.id !== viewer.companyId) throw new NotFound();
+  if (!policy(viewer, target)) throw new Forbidden();
 }

@@ -1,11 +1,13 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { afterResponse } from '../after-response';
+import { now } from '../clock';
 import { InvalidInput } from '../errors';
 import { enqueueMail } from '../mail/outbox';
 import { kickMailDelivery } from '../mail/worker';
 import { limiter } from '../rate-limit';
 import { hashPassword } from '../users/password';
 import { User } from '../users/user.entity';
+import { timeZoneOfUser } from '../users/memberships';
 import { passwordResetMail } from './mails';
 import { PasswordReset } from './password-reset.entity';
 import { Session } from './session.entity';
@@ -46,8 +48,8 @@ async function sendResetLinkIfAccount(em: EntityManager, email: string): Promise
   if ((await perEmail.used(email)) >= 3) return;
   await perEmail.consume(email, 'unused: checked above');
   const token = newLinkToken();
-  const reset = em.create(PasswordReset, { user, tokenDigest: linkTokenDigest('password-reset', token), expiresAt: new Date(Date.now() + RESET_LIFETIME_MS) });
-  const mail = passwordResetMail({ name: user.name, token, expiresAt: reset.expiresAt });
+  const reset = em.create(PasswordReset, { user, tokenDigest: linkTokenDigest('password-reset', token), expiresAt: new Date(now().getTime() + RESET_LIFETIME_MS) });
+  const mail = passwordResetMail({ name: user.name, token, expiresAt: reset.expiresAt, timeZone: await timeZoneOfUser(em, user.id) });
   enqueueMail(em, { to: user.email, subject: mail.subject, text: mail.text });
   await em.flush();
   kickMailDelivery();
@@ -63,7 +65,7 @@ export async function readPasswordReset(em: EntityManager, token: string): Promi
   const reset = await findByToken(em, token);
   if (!reset) return 'unknown';
   if (reset.usedAt) return 'used';
-  if (reset.expiresAt <= new Date()) return 'expired';
+  if (reset.expiresAt <= now()) return 'expired';
   return 'open';
 }
 
@@ -75,13 +77,14 @@ export async function completePasswordReset(em: EntityManager, token: string, pa
   const email = await em.transactional(async (tx) => {
     const reset = await findByToken(tx, token);
     if (!reset) throw new InvalidInput(RESET_PROBLEMS.unknown);
-    const spent = await tx.nativeUpdate(PasswordReset, { id: reset.id, usedAt: null, expiresAt: { $gt: new Date() } }, { usedAt: new Date() });
-    if (spent !== 1) throw new InvalidInput(reset.usedAt ? RESET_PROBLEMS.used : reset.expiresAt <= new Date() ? RESET_PROBLEMS.expired : RESET_PROBLEMS.used);
+    const at = now();
+    const spent = await tx.nativeUpdate(PasswordReset, { id: reset.id, usedAt: null, expiresAt: { $gt: at } }, { usedAt: at });
+    if (spent !== 1) throw new InvalidInput(reset.usedAt ? RESET_PROBLEMS.used : reset.expiresAt <= at ? RESET_PROBLEMS.expired : RESET_PROBLEMS.used);
     const user = await tx.findOneOrFail(User, { id: reset.user.id });
     user.passwordHash = await hashPassword(password);
     await tx.flush();
     // Other open links of this person are spent too: the password they were for is gone.
-    await tx.nativeUpdate(PasswordReset, { user, usedAt: null }, { usedAt: new Date() });
+    await tx.nativeUpdate(PasswordReset, { user, usedAt: null }, { usedAt: at });
     await tx.nativeDelete(Session, { user });
     return user.email;
   });

@@ -1,16 +1,15 @@
 import type { APIContext, APIRoute } from 'astro';
 import { errorResponse } from '../errors';
-import type { Role } from '../users/membership.entity';
-import { requireStaff, type Staff } from './guard';
+import { requireStaff, type Staff, type ViewerPolicy } from './guard';
 
 /**
- * Wraps a staff API route: runs the guard (with an optional role), then the handler, and maps every
- * error to the JSON shape `{"error", "fields"}` with its status.
+ * Wraps a staff API route: runs the guard (with an optional policy), then the handler, and maps
+ * every error to the JSON shape `{"error", "fields"}` with its status.
  *
- *   export const GET = staffEndpoint({ role: 'owner' }, ({ staff, locals }) => ...);
+ *   export const GET = staffEndpoint({ may: canManageTeam }, ({ staff, locals }) => ...);
  */
 export function staffEndpoint(
-  options: { role?: Role },
+  options: { may?: ViewerPolicy },
   handler: (context: APIContext & { staff: Staff }) => Promise<Response> | Response,
 ): APIRoute {
   return async (context) => {

@@ -18,12 +18,19 @@ export const publishedRatesCacheKey = (companyId: string) => `published-rates:${
 
 /** The firm's published Rate book, parsed. A firm without one cannot give estimates yet (503). */
 export async function publishedRates(em: EntityManager, companyId: string): Promise<PublishedRates> {
+  const published = await publishedRatesIfAny(em, companyId);
+  if (!published) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
+  return published;
+}
+
+/** The firm's published Rate book, parsed, or null while it has none (for pages that work without one). */
+export async function publishedRatesIfAny(em: EntityManager, companyId: string): Promise<PublishedRates | null> {
   const version = await em.findOne(
     RateBookVersion,
     { company: companyId, status: 'published' },
     { orderBy: { number: 'desc' }, cache: [publishedRatesCacheKey(companyId), PUBLISHED_RATES_CACHE_MS] },
   );
-  if (!version) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
+  if (!version) return null;
   let rateBook = parsedByVersion.get(version.id);
   if (!rateBook) {
     rateBook = storedRateBook.read(version.data);

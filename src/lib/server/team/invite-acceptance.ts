@@ -1,4 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { now } from '../clock';
 import { InvalidInput } from '../errors';
 import { Membership, type Role } from '../users/membership.entity';
 import { hashPassword, verifyPassword } from '../users/password';
@@ -26,7 +27,7 @@ export async function readInvite(em: EntityManager, token: string): Promise<Invi
   const invite = await findByToken(em, token);
   if (!invite) return { state: 'unknown' };
   if (invite.acceptedAt) return { state: 'used' };
-  if (invite.expiresAt <= new Date()) return { state: 'expired' };
+  if (invite.expiresAt <= now()) return { state: 'expired' };
   const user = await em.findOne(User, { email: invite.email }, { populate: ['passwordHash'] });
   return { state: 'open', firmName: invite.company.name, email: invite.email, role: invite.role, hasAccount: Boolean(user?.passwordHash) };
 }
@@ -45,12 +46,13 @@ export async function acceptInvite(
   return em.transactional(async (tx) => {
     const invite = await findByToken(tx, token);
     if (!invite) throw new InvalidInput(LINK_PROBLEMS.unknown);
+    const at = now();
     const spent = await tx.nativeUpdate(
       Invite,
-      { id: invite.id, acceptedAt: null, expiresAt: { $gt: new Date() } },
-      { acceptedAt: new Date() },
+      { id: invite.id, acceptedAt: null, expiresAt: { $gt: at } },
+      { acceptedAt: at },
     );
-    if (spent !== 1) throw new InvalidInput(invite.acceptedAt ? LINK_PROBLEMS.used : invite.expiresAt <= new Date() ? LINK_PROBLEMS.expired : LINK_PROBLEMS.used);
+    if (spent !== 1) throw new InvalidInput(invite.acceptedAt ? LINK_PROBLEMS.used : invite.expiresAt <= at ? LINK_PROBLEMS.expired : LINK_PROBLEMS.used);
 
     let user = await tx.findOne(User, { email: invite.email }, { populate: ['passwordHash'] });
     if (user?.passwordHash) {

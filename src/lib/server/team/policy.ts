@@ -1,8 +1,4 @@
-import type { Role } from '../users/membership.entity';
+import { roleInFirm, type FirmScoped, type Viewer } from '../viewer';
 
-// What each role may do, as pure functions: the guard enforces them on the server, the shell uses
-// them to decide which links to show.
-
-export const canManageTeam = (role: Role): boolean => role === 'owner';
-export const canUseRateBook = (role: Role): boolean => role === 'owner';
-export const canUseSetup = (role: Role): boolean => role === 'owner';
+/** Invite people, change roles, remove members, withdraw invitations: the owner only. */
+export const canManageTeam = (viewer: Viewer, target?: FirmScoped): boolean => roleInFirm(viewer, ['owner'], target);

@@ -2,6 +2,7 @@ import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { isId } from '~/lib/shared/ids';
 import { Company } from '../companies/company.entity';
+import { now } from '../clock';
 import { Conflict, NotFound } from '../errors';
 import { enqueueMail } from '../mail/outbox';
 import { Membership, type Role } from '../users/membership.entity';
@@ -21,7 +22,7 @@ export type PendingInvite = { id: string; email: string; role: Role; expiresAt: 
 export async function listTeam(em: EntityManager, companyId: string): Promise<{ members: TeamMember[]; invites: PendingInvite[] }> {
   const [members, invites] = await Promise.all([
     em.find(Membership, { company: companyId }, { populate: ['user'], orderBy: { user: { name: 'asc' } } }),
-    em.find(Invite, { company: companyId, acceptedAt: null, expiresAt: { $gt: new Date() } }, { orderBy: { createdAt: 'asc' } }),
+    em.find(Invite, { company: companyId, acceptedAt: null, expiresAt: { $gt: now() } }, { orderBy: { createdAt: 'asc' } }),
   ]);
   return {
     members: members.map((m) => ({ id: m.id, userId: m.user.id, name: m.user.name, email: m.user.email, role: m.role })),
@@ -50,9 +51,9 @@ export async function inviteToTeam(
     role: input.role,
     tokenDigest: linkTokenDigest('invite', token),
     invitedBy: inviter,
-    expiresAt: new Date(Date.now() + INVITE_LIFETIME_MS),
+    expiresAt: new Date(now().getTime() + INVITE_LIFETIME_MS),
   });
-  const mail = inviteMail({ firmName: company.name, inviterName: inviter?.name ?? null, role: input.role, token, expiresAt: invite.expiresAt });
+  const mail = inviteMail({ firmName: company.name, inviterName: inviter?.name ?? null, role: input.role, token, expiresAt: invite.expiresAt, timeZone: company.timeZone });
   enqueueMail(em, { to: input.email, subject: mail.subject, text: mail.text, companyId: company.id });
   await em.flush();
   return { id: invite.id, email: invite.email, role: invite.role, expiresAt: invite.expiresAt.toISOString() };
