@@ -11,6 +11,7 @@ import { currentJobRunner, JOBS_SCHEMA, startJobRunner } from '../../src/lib/ser
 import { kickMailDelivery, MAIL_DELIVERY_JOB } from '../../src/lib/server/mail/delivery-job';
 import { enqueueMail } from '../../src/lib/server/mail/outbox';
 import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
+import { abandonedPhotosJob } from '../../src/lib/server/photos/abandoned-photos';
 import { waitForMail } from '../helpers/mailbox';
 import { openMigratedDatabase } from '../helpers/migrated-database';
 
@@ -41,6 +42,7 @@ describe('the job runner', () => {
     expect(queues).toEqual(expect.arrayContaining(backgroundJobs.map((job) => job.name)));
     const schedules = await runner.boss.getSchedules();
     expect(schedules.find((s) => s.name === MAIL_DELIVERY_JOB)?.cron).toBe('* * * * *');
+    expect(schedules.find((s) => s.name === abandonedPhotosJob.name)?.cron).toBe('17 * * * *');
 
     // A kick after the commit has the runner deliver the mail, without any request involved.
     const to = `runner-${randomBytes(4).toString('hex')}@example.test`;
