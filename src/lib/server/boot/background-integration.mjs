@@ -5,7 +5,8 @@
 //     module with the app's entry, so `dist/server/background.mjs` and `dist/server/entry.mjs`
 //     loaded in one process use one ORM. `scripts/serve.mjs` imports and starts it.
 //   astro dev: loads background.ts through the dev server's module graph (the one pages use)
-//     once the server listens, and stops it when the dev server closes.
+//     once the server listens, and stops it before the dev server closes. On SIGTERM, Vite closes
+//     the dev server and exits; on SIGINT nothing would, so that is handled here.
 import { fileURLToPath } from 'node:url';
 
 const entry = fileURLToPath(new URL('./background.ts', import.meta.url));
@@ -33,6 +34,9 @@ export function backgroundEntry() {
     running = undefined;
     await current?.stop();
   };
+  const stopAndExit = () => {
+    stop().finally(() => process.exit(0));
+  };
 
   return {
     name: 'lapwing-background',
@@ -46,15 +50,24 @@ export function backgroundEntry() {
       },
       'astro:server:setup': ({ server }) => {
         devServer = server;
-        server.httpServer?.once('close', () => void stop());
+        // Vite's own SIGTERM handler awaits close() and then exits: stop the jobs first.
+        const close = server.close.bind(server);
+        server.close = async () => {
+          await stop();
+          await close();
+        };
       },
       'astro:server:start': async ({ logger }) => {
         if (!devServer) return;
         const background = await devServer.ssrLoadModule(entry);
         running = background.startBackground();
+        process.once('SIGINT', stopAndExit);
         logger.info('background jobs starting with the dev server');
       },
-      'astro:server:done': stop,
+      'astro:server:done': async () => {
+        process.off('SIGINT', stopAndExit);
+        await stop();
+      },
     },
   };
 }
