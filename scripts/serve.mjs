@@ -4,11 +4,17 @@
 // past every per-address rate limit. Here the header is removed unless TRUST_PROXY=true (set it only
 // behind a proxy that overwrites the header), so the address is the direct peer.
 //
+// The same process runs the background jobs (mail delivery, clean-ups): `dist/server/background.mjs`
+// is a second entry of the same Vite build, sharing the app's modules (see DEVELOPERS.md,
+// "Background jobs"). On SIGTERM/SIGINT it stops taking requests and jobs, gives running jobs a
+// few seconds, and exits.
+//
 // Environment: HOST (default 127.0.0.1), PORT (default 4321), TRUST_PROXY.
 import http from 'node:http';
 
 process.env.ASTRO_NODE_AUTOSTART = 'disabled';
 const { handler } = await import('../dist/server/entry.mjs');
+const { startBackground } = await import('../dist/server/background.mjs');
 
 const host = process.env.HOST || '127.0.0.1';
 const port = Number(process.env.PORT || 4321);
@@ -32,11 +38,18 @@ const server = http.createServer((req, res) => {
 server.listen(port, host, () => {
   console.log(`Lapwing app server listening on http://${host}:${port}${trustProxy ? ' (trusting X-Forwarded-For)' : ''}`);
 });
+const background = startBackground();
 
-function stop() {
-  server.close(() => process.exit(0));
+let stopping = false;
+async function stop() {
+  if (stopping) return;
+  stopping = true;
+  // Whatever happens below, the process is gone before `npm start` would resort to SIGKILL (5 s).
+  setTimeout(() => process.exit(0), 4500).unref();
+  const closed = new Promise((resolve) => server.close(resolve));
   server.closeAllConnections();
-  setTimeout(() => process.exit(0), 3000).unref();
+  await Promise.all([closed, background.stop().catch((error) => console.error('[jobs] stopping:', error))]);
+  process.exit(0);
 }
 process.on('SIGTERM', stop);
 process.on('SIGINT', stop);

@@ -68,7 +68,6 @@ try {
     : [process.execPath, ['scripts/serve.mjs']];
   const server = startChild('app server', command, args, { env, onExit: (code) => shutdown(code || 1) });
   await server.ready;
-  // The first request also starts the app's mail delivery loop, so queued mail goes out at once.
   await waitForHealth(`http://${host}:${appPort}/api/health`);
 } catch (error) {
   process.stderr.write(`${error instanceof Error ? error.message : error}\n`);

@@ -1,7 +1,6 @@
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { RequestContext } from '@mikro-orm/core';
 import { getOrm } from '~/lib/server/boot/orm';
-import { startMailWorker } from '~/lib/server/mail/worker';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { csrf } from '~/lib/server/auth/csrf';
 import { session } from '~/lib/server/auth/session-middleware';
@@ -13,7 +12,6 @@ import { STRICT_TRANSPORT_SECURITY, completePolicy, mayBeFramed, mustNotBeStored
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
   const orm = await getOrm();
-  startMailWorker(orm);
   return RequestContext.create(orm.em, () => {
     context.locals.em = RequestContext.getEntityManager() as EntityManager;
     return next();

@@ -2,7 +2,7 @@ import { readFile, readdir } from 'node:fs/promises';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 
-export type ReceivedMail = { file: string; to: string[]; subject: string; text: string; html: string; replyTo?: string };
+export type ReceivedMail = { file: string; to: string[]; subject: string; text: string; html: string; replyTo?: string; messageId?: string };
 
 function mailDir(): string {
   const dir = process.env.DEV_MAIL_DIR;
@@ -24,6 +24,7 @@ async function readAll(): Promise<ReceivedMail[]> {
         text: parsed.text ?? '',
         html: typeof parsed.html === 'string' ? parsed.html : '',
         replyTo: parsed.replyTo?.value[0]?.address,
+        messageId: parsed.messageId,
       };
     }),
   );

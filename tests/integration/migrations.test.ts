@@ -7,6 +7,8 @@ import { buildLead } from '../helpers/factories';
 import { Company } from '../../src/lib/server/companies/company.entity';
 import { estimateSnapshot } from '../../src/lib/server/estimates/estimate-snapshot';
 import { Lead } from '../../src/lib/server/leads/lead.entity';
+import { backgroundJobs } from '../../src/lib/server/boot/jobs';
+import { JOBS_SCHEMA, startJobRunner } from '../../src/lib/server/jobs/runner';
 
 async function tableNames(orm: MikroORM): Promise<string[]> {
   const rows = await orm.em
@@ -17,11 +19,13 @@ async function tableNames(orm: MikroORM): Promise<string[]> {
 
 describe('migrations', () => {
   let orm: MikroORM;
+  let url: string;
   let drop: () => Promise<void>;
 
   beforeAll(async () => {
     const database = await createThrowawayDatabase();
     drop = database.drop;
+    url = database.url;
     orm = await openOrm(database.url);
   });
 
@@ -56,6 +60,23 @@ describe('migrations', () => {
     // No drift: the migrations produce exactly what the entity definitions describe.
     const drift = await orm.schema.getUpdateSchemaSQL({ wrap: false });
     expect(drift.trim()).toBe('');
+  });
+
+  test('the job runner’s own schema (pg-boss) is invisible to the migrations and to the drift check', async () => {
+    await orm.migrator.up();
+    const runner = await startJobRunner({ orm, connectionString: url, jobs: backgroundJobs });
+    await runner.stop();
+    const [installed] = await orm.em.getConnection().execute<{ n: number }[]>(
+      `select count(*)::int as n from information_schema.tables where table_schema = ?`,
+      [JOBS_SCHEMA],
+    );
+    expect(installed!.n).toBeGreaterThan(0);
+
+    expect((await orm.schema.getUpdateSchemaSQL({ wrap: false })).trim()).toBe('');
+    await orm.migrator.down({ to: 0 });
+    expect(await tableNames(orm)).toEqual([]);
+    await orm.migrator.up();
+    expect((await orm.schema.getUpdateSchemaSQL({ wrap: false })).trim()).toBe('');
   });
 
   test('a lead stored before envelopes (bare JSON, old stage name) still opens after the migrations', async () => {

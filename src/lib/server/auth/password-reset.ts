@@ -3,7 +3,7 @@ import { afterResponse } from '../after-response';
 import { now } from '../clock';
 import { InvalidInput } from '../errors';
 import { enqueueMail } from '../mail/outbox';
-import { kickMailDelivery } from '../mail/worker';
+import { kickMailDelivery } from '../mail/delivery-job';
 import { limiter } from '../rate-limit';
 import { hashPassword } from '../users/password';
 import { User } from '../users/user.entity';

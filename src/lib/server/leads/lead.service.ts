@@ -12,7 +12,7 @@ import type { FirmEstimate } from '../estimates/estimate.service';
 import { estimateSnapshot } from '../estimates/estimate-snapshot';
 import { presentForHomeowner, type HomeownerEstimate } from '../estimates/present-estimate';
 import { enqueueMail } from '../mail/outbox';
-import { kickMailDelivery } from '../mail/worker';
+import { kickMailDelivery } from '../mail/delivery-job';
 import { Lead } from './lead.entity';
 import { leadInputs } from './lead-inputs';
 import { homeownerConfirmation, newLeadAlert } from './lead-mail';

@@ -2,7 +2,11 @@ import { Entity, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
 import { BaseEntity } from '../db/base.entity';
 import type { Company } from '../companies/company.entity';
 
-export type OutboxStatus = 'queued' | 'sent' | 'failed';
+/**
+ * queued → sending (claimed by one delivery pass until `claimedUntil`) → sent, or back to queued
+ * for a later attempt, or failed after the last attempt.
+ */
+export type OutboxStatus = 'queued' | 'sending' | 'sent' | 'failed';
 
 /**
  * A message waiting to go out. Written in the same transaction as the change that caused it, so a
@@ -42,6 +46,17 @@ export class OutboxMail extends BaseEntity {
 
   @Property({ type: 'text', nullable: true })
   lastError: string | null = null;
+
+  /**
+   * The Message-ID header, chosen when the message is first claimed and kept for every attempt,
+   * so a message sent again after a crash is recognisably the same message.
+   */
+  @Property({ type: 'string', length: 255, nullable: true })
+  messageId: string | null = null;
+
+  /** While `sending`: the pass that claimed it has until then; after that another pass may retry it. */
+  @Property({ type: 'datetime', nullable: true })
+  claimedUntil: Date | null = null;
 
   @Property({ type: 'datetime', nullable: true })
   sentAt: Date | null = null;

@@ -1,7 +1,15 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import { config } from '../config';
 
-export type OutgoingMail = { to: string; subject: string; text: string; html?: string; replyTo?: string };
+export type OutgoingMail = {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  replyTo?: string;
+  /** The Message-ID header to send (kept by the outbox across attempts); nodemailer makes one otherwise. */
+  messageId?: string;
+};
 export type SendMail = (message: OutgoingMail) => Promise<void>;
 
 /** A sender for one SMTP server (smtp:// or smtps:// URL). */

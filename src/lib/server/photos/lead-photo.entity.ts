@@ -2,7 +2,8 @@ import { Entity, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
 import { TenantEntity } from '../companies/tenant.entity';
 import type { Lead } from '../leads/lead.entity';
 
-export type PhotoStatus = 'pending' | 'ready' | 'refused';
+/** pending → checking (one request checks it, until `checkingUntil`) → ready or refused; back to pending if nothing arrived. */
+export type PhotoStatus = 'pending' | 'checking' | 'ready' | 'refused';
 
 /**
  * A homeowner's photo. Uploaded under a widget draft before the lead exists; attached to the lead
@@ -46,4 +47,8 @@ export class LeadPhoto extends TenantEntity {
 
   @Property({ type: 'string', length: 300, nullable: true })
   refusal: string | null = null;
+
+  /** While `checking`: the request checking it has until then; after that another may take over. */
+  @Property({ type: 'datetime', nullable: true })
+  checkingUntil: Date | null = null;
 }

@@ -97,86 +97,183 @@ function findDraftPhoto(em: EntityManager, { companyId, draftId }: DraftRef, pho
   );
 }
 
-type CheckOutcome = { photo: LeadPhoto } | { refusal: string };
+/**
+ * How long one request may take to check a photo (seconds in practice). A request that died in
+ * the middle leaves the photo `checking`; after this long another request takes the check over.
+ */
+export const CHECK_CLAIM_MS = 2 * 60 * 1000;
+
+/** How often a request that finds the photo being checked by another looks again. */
+const CHECK_WAIT_STEP_MS = 150;
+
+const NOT_RECEIVED = 'We did not receive this photo. Please try again.';
+
+/** The shape of the upload key `requestUpload` signs: the photo's own firm and draft, then a UUID. */
+const SIGNED_UPLOAD_KEY = /^uploads\/([0-9a-f-]{36})\/([0-9a-f-]{36})\/[0-9a-f-]{36}$/;
+
+type PhotoRef = DraftRef & { photoId: string };
+
+/** What the claiming transaction found. */
+type ClaimStep =
+  | { kind: 'ready'; photo: LeadPhoto }
+  | { kind: 'refused'; refusal: string; deleteUpload?: string }
+  | { kind: 'busy' }
+  | { kind: 'claimed'; uploadKey: string; checkingUntil: Date };
+
+/** What the storage reads and the image work found. */
+type Verdict =
+  | { kind: 'missing' }
+  | { kind: 'refused'; refusal: string }
+  | { kind: 'clean'; imageKey: string; thumbKey: string; width: number; height: number; bytes: number };
 
 /**
  * Checks the file the browser uploaded and keeps a clean copy, or refuses it.
  *
- * The stored object is the only thing trusted: its size from HeadObject (the storage's size policy
- * is not enforced by the local stand-in), its type from its first bytes, its pixels by decoding.
+ * Only the stored object at the key we signed is trusted: its size from HeadObject (the storage's
+ * size policy is not enforced by the local stand-in), its type from its first bytes, its pixels by
+ * decoding; the bytes read are the very version whose size was checked (If-Match on its ETag).
  * Success: `ready`, with the re-encoded image and thumbnail stored and the upload deleted.
  * Refusal: the upload is deleted, the photo is `refused`, and InvalidInput (field `photo`) carries
- * the message. Calling it again for a ready photo answers the same photo.
+ * the message. Nothing (or a changed object) arrived: the photo stays `pending` for another try.
+ *
+ * No transaction or pool connection is held through storage or sharp: a short transaction claims
+ * the photo (`checking` until a deadline), the work runs outside, and a second short transaction
+ * records the result while the claim is still ours. A repeated or parallel call waits for the
+ * check under way and answers its result, so every call ends with the same one.
  */
-export async function completeUpload(em: EntityManager, ref: DraftRef & { photoId: string }, now = Date.now()): Promise<LeadPhoto> {
-  const outcome = await em.transactional(async (tx): Promise<CheckOutcome> => {
-    // The row lock makes a repeated or parallel "complete" wait for the first and then see its result.
-    const photo = await findDraftPhoto(tx, ref, ref.photoId, true);
-    if (!photo) throw new NotFound('This photo is not part of this form.');
-    if (photo.status === 'ready') return { photo };
-    if (photo.status === 'refused') return { refusal: photo.refusal ?? REFUSALS.notAPhoto };
-
-    const refuse = async (message: string): Promise<CheckOutcome> => {
-      await storage.deleteObject(photo.uploadKey);
-      photo.status = 'refused';
-      photo.refusal = message;
-      return { refusal: message };
-    };
-
-    if (now - photo.createdAt.getTime() > PENDING_HOLD_MS) {
-      return refuse('This upload took too long to finish. Please add the photo again.');
+export async function completeUpload(em: EntityManager, ref: PhotoRef, now = Date.now()): Promise<LeadPhoto> {
+  const started = Date.now();
+  // `now` is the time of the request; the clock moves on while we wait for another check.
+  const clock = () => now + (Date.now() - started);
+  for (;;) {
+    const step = await claimCheck(em.fork(), ref, clock());
+    if (step.kind === 'ready') return step.photo;
+    if (step.kind === 'refused') {
+      if (step.deleteUpload) await storage.deleteObject(step.deleteUpload);
+      throw new InvalidInput(step.refusal, { photo: step.refusal });
     }
-    const stored = await storage.headObject(photo.uploadKey);
-    if (!stored) {
-      // Nothing arrived (yet): leave it pending so the browser can upload again and retry.
-      throw new InvalidInput('We did not receive this photo. Please try again.', { photo: 'We did not receive this photo. Please try again.' });
+    if (step.kind === 'busy') {
+      await new Promise((resolve) => setTimeout(resolve, CHECK_WAIT_STEP_MS));
+      continue;
     }
-    if (stored.size > MAX_PHOTO_BYTES) return refuse(REFUSALS.tooBig);
-    if (stored.size === 0) return refuse(REFUSALS.empty);
 
-    const bytes = await storage.getObjectBuffer(photo.uploadKey);
-    if (!bytes) throw new InvalidInput('We did not receive this photo. Please try again.', { photo: 'We did not receive this photo. Please try again.' });
-    if (bytes.length > MAX_PHOTO_BYTES) return refuse(REFUSALS.tooBig);
-
-    let clean;
+    let verdict: Verdict;
     try {
-      clean = await cleanPhoto(bytes);
+      verdict = await inspectUpload(ref, step.uploadKey);
     } catch (error) {
-      if (error instanceof PhotoRefused) return refuse(error.message);
+      // Storage trouble: let go of the claim so the homeowner can try again at once.
+      await em.fork().nativeUpdate(LeadPhoto, { id: ref.photoId, status: 'checking', checkingUntil: step.checkingUntil }, { status: 'pending', checkingUntil: null });
       throw error;
     }
+    const recorded = await recordCheck(em.fork(), ref, step, verdict);
+    // Another request took over (ours outlived its deadline) and may have finished: answer its result.
+    if (recorded === 'lost-claim') continue;
+    if (recorded === 'removed') throw new NotFound('This photo is not part of this form.');
+    if (verdict.kind === 'missing') throw new InvalidInput(NOT_RECEIVED, { photo: NOT_RECEIVED });
+    // Refused or kept, the upload itself is not needed any more.
+    await storage.deleteObject(step.uploadKey);
+    if (verdict.kind === 'refused') throw new InvalidInput(verdict.refusal, { photo: verdict.refusal });
+    return recorded;
+  }
+}
 
-    const image = imageKey(ref.companyId, photo.id);
-    const thumb = thumbKey(ref.companyId, photo.id);
-    await storage.putObject(image, clean.image, 'image/jpeg');
-    await storage.putObject(thumb, clean.thumbnail, 'image/jpeg');
-    await storage.deleteObject(photo.uploadKey);
-    Object.assign(photo, { status: 'ready', imageKey: image, thumbKey: thumb, width: clean.width, height: clean.height, bytes: clean.image.length });
-
-    // The homeowner may have sent the form while this photo was still on its way.
-    const sentLead = await tx.findOne(Lead, { company: ref.companyId, draftId: ref.draftId });
-    if (sentLead) photo.lead = sentLead;
-    return { photo };
+/** The short first transaction: answers a finished check, or claims the photo for this request. */
+function claimCheck(em: EntityManager, ref: PhotoRef, now: number): Promise<ClaimStep> {
+  return em.transactional(async (tx): Promise<ClaimStep> => {
+    const photo = await findDraftPhoto(tx, ref, ref.photoId, true);
+    if (!photo) throw new NotFound('This photo is not part of this form.');
+    if (photo.status === 'ready') return { kind: 'ready', photo };
+    if (photo.status === 'refused') return { kind: 'refused', refusal: photo.refusal ?? REFUSALS.notAPhoto };
+    if (photo.status === 'checking' && photo.checkingUntil && photo.checkingUntil.getTime() > now) return { kind: 'busy' };
+    if (now - photo.createdAt.getTime() > PENDING_HOLD_MS) {
+      const refusal = 'This upload took too long to finish. Please add the photo again.';
+      Object.assign(photo, { status: 'refused', refusal, checkingUntil: null });
+      return { kind: 'refused', refusal, deleteUpload: photo.uploadKey };
+    }
+    // Defence in depth: whatever the row says, read nothing outside this photo's firm and draft.
+    if (!isSignedUploadKey(photo.uploadKey, ref)) {
+      throw new Error(`Photo ${photo.id} has an upload key outside its firm and draft; it is not read.`);
+    }
+    photo.status = 'checking';
+    photo.checkingUntil = new Date(now + CHECK_CLAIM_MS);
+    return { kind: 'claimed', uploadKey: photo.uploadKey, checkingUntil: photo.checkingUntil };
   });
+}
 
-  if ('refusal' in outcome) throw new InvalidInput(outcome.refusal, { photo: outcome.refusal });
-  return outcome.photo;
+function isSignedUploadKey(key: string, { companyId, draftId }: DraftRef): boolean {
+  const match = SIGNED_UPLOAD_KEY.exec(key);
+  return match !== null && match[1] === companyId && match[2] === draftId;
+}
+
+/** Storage reads, the image work and the writes of the clean copies, outside any transaction. */
+async function inspectUpload(ref: PhotoRef, uploadKey: string): Promise<Verdict> {
+  const stored = await storage.headObject(uploadKey);
+  if (!stored) return { kind: 'missing' };
+  if (stored.size > MAX_PHOTO_BYTES) return { kind: 'refused', refusal: REFUSALS.tooBig };
+  if (stored.size === 0) return { kind: 'refused', refusal: REFUSALS.empty };
+
+  // Exactly the version whose size was just checked, and never more than one byte past the limit.
+  const bytes = await storage.getObjectBuffer(uploadKey, { ifMatch: stored.etag, maxBytes: MAX_PHOTO_BYTES });
+  if (!bytes) return { kind: 'missing' };
+  if (bytes.length > MAX_PHOTO_BYTES) return { kind: 'refused', refusal: REFUSALS.tooBig };
+
+  let clean;
+  try {
+    clean = await cleanPhoto(bytes);
+  } catch (error) {
+    if (error instanceof PhotoRefused) return { kind: 'refused', refusal: error.message };
+    throw error;
+  }
+  const image = imageKey(ref.companyId, ref.photoId);
+  const thumb = thumbKey(ref.companyId, ref.photoId);
+  await storage.putObject(image, clean.image, 'image/jpeg');
+  await storage.putObject(thumb, clean.thumbnail, 'image/jpeg');
+  return { kind: 'clean', imageKey: image, thumbKey: thumb, width: clean.width, height: clean.height, bytes: clean.image.length };
 }
 
 /**
- * The homeowner takes a photo back before sending: its stored files and its row are deleted.
+ * The short second transaction: writes the verdict while the claim is still this request's.
+ * 'lost-claim' when another request took over; 'removed' when the homeowner removed the photo
+ * meanwhile (the copies just written are deleted again).
+ */
+async function recordCheck(em: EntityManager, ref: PhotoRef, claim: { checkingUntil: Date }, verdict: Verdict): Promise<LeadPhoto | 'lost-claim' | 'removed'> {
+  const result = await em.transactional(async (tx): Promise<LeadPhoto | 'lost-claim' | 'removed'> => {
+    const photo = await findDraftPhoto(tx, ref, ref.photoId, true);
+    if (!photo) return 'removed';
+    if (photo.status !== 'checking' || photo.checkingUntil?.getTime() !== claim.checkingUntil.getTime()) return 'lost-claim';
+    photo.checkingUntil = null;
+    if (verdict.kind === 'missing') {
+      photo.status = 'pending';
+    } else if (verdict.kind === 'refused') {
+      Object.assign(photo, { status: 'refused', refusal: verdict.refusal });
+    } else {
+      Object.assign(photo, { status: 'ready', imageKey: verdict.imageKey, thumbKey: verdict.thumbKey, width: verdict.width, height: verdict.height, bytes: verdict.bytes });
+      // The homeowner may have sent the form while this photo was still on its way.
+      const sentLead = await tx.findOne(Lead, { company: ref.companyId, draftId: ref.draftId });
+      if (sentLead) photo.lead = sentLead;
+    }
+    return photo;
+  });
+  if (result === 'removed' && verdict.kind === 'clean') {
+    for (const key of [verdict.imageKey, verdict.thumbKey]) await storage.deleteObject(key);
+  }
+  return result;
+}
+
+/**
+ * The homeowner takes a photo back before sending: its row is deleted, then its stored files.
  * A photo already sent with a lead stays (Conflict); staff own it from then on.
  */
-export async function removePhoto(em: EntityManager, ref: DraftRef & { photoId: string }): Promise<void> {
-  await em.transactional(async (tx) => {
+export async function removePhoto(em: EntityManager, ref: PhotoRef): Promise<void> {
+  const keys = await em.transactional(async (tx) => {
     const photo = await findDraftPhoto(tx, ref, ref.photoId, true);
     if (!photo) throw new NotFound('This photo is not part of this form.');
     if (photo.lead) throw new Conflict('This photo was sent with your inquiry, so it can no longer be removed here.');
-    for (const key of [photo.uploadKey, photo.imageKey, photo.thumbKey]) {
-      if (key) await storage.deleteObject(key);
-    }
     tx.remove(photo);
+    return [photo.uploadKey, photo.imageKey, photo.thumbKey];
   });
+  // Outside the transaction. A check still under way finds the row gone and deletes its own copies.
+  for (const key of keys) if (key) await storage.deleteObject(key);
 }
 
 /**

@@ -44,27 +44,48 @@ function isMissing(error: unknown): boolean {
   );
 }
 
+/** The object is no longer the version asked for (If-Match), or shrank below the range asked for. */
+function isChanged(error: unknown): boolean {
+  return (
+    error instanceof S3ServiceException &&
+    (error.name === 'PreconditionFailed' || error.name === 'InvalidRange' || error.$metadata.httpStatusCode === 412 || error.$metadata.httpStatusCode === 416)
+  );
+}
+
 export async function putObject(key: string, body: Buffer, contentType: string): Promise<void> {
   await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: body, ContentType: contentType }));
 }
 
-/** The whole object in memory, or null when there is no such key. Callers check the size first. */
-export async function getObjectBuffer(key: string): Promise<Buffer | null> {
+/**
+ * The object in memory, or null when there is no such key. Callers check the size first.
+ *
+ * `ifMatch` (an ETag from headObject) reads exactly that version: S3 answers 412 when the object
+ * has changed since, and since the local stand-in ignores If-Match the ETag of the answer is
+ * compared here as well; either way the answer is null. `maxBytes` bounds the read to that many
+ * bytes plus one, so a caller can tell "too big" without holding all of it.
+ */
+export async function getObjectBuffer(key: string, { ifMatch, maxBytes }: { ifMatch?: string; maxBytes?: number } = {}): Promise<Buffer | null> {
   try {
-    const result = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+    const result = await s3().send(
+      new GetObjectCommand({ Bucket: bucket(), Key: key, IfMatch: ifMatch, Range: maxBytes === undefined ? undefined : `bytes=0-${maxBytes}` }),
+    );
+    if (ifMatch !== undefined && result.ETag !== ifMatch) {
+      await result.Body?.transformToByteArray().catch(() => undefined);
+      return null;
+    }
     if (!result.Body) return Buffer.alloc(0);
     return Buffer.from(await result.Body.transformToByteArray());
   } catch (error) {
-    if (isMissing(error)) return null;
+    if (isMissing(error) || isChanged(error)) return null;
     throw error;
   }
 }
 
-/** Size of a stored object, or null when there is no such key. */
-export async function headObject(key: string): Promise<{ size: number } | null> {
+/** Size and ETag of a stored object, or null when there is no such key. */
+export async function headObject(key: string): Promise<{ size: number; etag: string } | null> {
   try {
     const result = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
-    return { size: result.ContentLength ?? 0 };
+    return { size: result.ContentLength ?? 0, etag: result.ETag ?? '' };
   } catch (error) {
     if (isMissing(error)) return null;
     throw error;

@@ -1,7 +1,7 @@
 import { staffEndpoint } from '~/lib/server/auth/staff-endpoint';
 import { canManageTeam } from '~/lib/server/team/policy';
 import { readJson } from '~/lib/server/http';
-import { kickMailDelivery } from '~/lib/server/mail/worker';
+import { kickMailDelivery } from '~/lib/server/mail/delivery-job';
 import { inviteToTeam } from '~/lib/server/team/team.service';
 import { inviteSchema } from '~/lib/shared/auth-schemas';
 
