@@ -4,15 +4,24 @@
 // past every per-address rate limit. Here the header is removed unless TRUST_PROXY=true (set it only
 // behind a proxy that overwrites the header), so the address is the direct peer.
 //
-// Environment: HOST (default 127.0.0.1), PORT (default 4321), TRUST_PROXY.
+// Environment: HOST (default 127.0.0.1), PORT (default 4321), TRUST_PROXY, and the app's settings
+// (src/lib/server/config.ts), all checked before the server listens.
 import http from 'node:http';
+
+// A wrong or missing setting stops the start here, with every bad variable named, rather than
+// surfacing later as failed requests or e-mails that link to the wrong address.
+const { checkEnvironment } = await import('../dist/server/config-check.mjs');
+const checked = checkEnvironment(process.env);
+if (!checked.ok) {
+  process.stderr.write(`${checked.error.message}\n`);
+  process.exit(1);
+}
 
 process.env.ASTRO_NODE_AUTOSTART = 'disabled';
 const { handler } = await import('../dist/server/entry.mjs');
 
-const host = process.env.HOST || '127.0.0.1';
-const port = Number(process.env.PORT || 4321);
-const trustProxy = process.env.TRUST_PROXY === 'true';
+const { HOST: host, PORT: port } = checked.settings;
+const trustProxy = checked.settings.TRUST_PROXY === 'true';
 
 const server = http.createServer((req, res) => {
   if (!trustProxy) delete req.headers['x-forwarded-for'];
