@@ -6,6 +6,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { csrf } from './lib/server/auth/csrf';
 import { session } from './lib/server/auth/session-middleware';
 import { staffArea } from './lib/server/auth/staff-area';
+import { requestLog } from './lib/server/request-log';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
@@ -40,5 +41,6 @@ const securityHeaders = defineMiddleware(async (context, next) => {
   return response;
 });
 
-// Order matters: refuse cross-site writes before any work, then find the session, then guard /app.
-export const onRequest = sequence(requestContext, securityHeaders, csrf, session, staffArea);
+// Order matters: the request id and log first, so every later step logs with it; then refuse
+// cross-site writes before any work, find the session, and guard /app.
+export const onRequest = sequence(requestLog, requestContext, securityHeaders, csrf, session, staffArea);

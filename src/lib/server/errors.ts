@@ -1,3 +1,5 @@
+import { currentLog } from './log';
+
 /**
  * The one error vocabulary of the server. Domain code throws these; `errorResponse()` maps them to a
  * status and the public JSON shape `{"error": "...", "fields": {"path": "message"}}`.
@@ -59,13 +61,13 @@ export class TooManyRequests extends AppError {
   }
 }
 
-/** Maps any thrown value to a JSON response; unknown errors become a logged 500 with no detail. */
+/** Maps any thrown value to a JSON response; unknown errors become a 500 with no detail, logged with the request's id. */
 export function errorResponse(error: unknown, extraHeaders: Record<string, string> = {}): Response {
   if (error instanceof AppError) {
     const body: { error: string; fields?: Record<string, string> } = { error: error.message };
     if (error.fields && Object.keys(error.fields).length) body.fields = error.fields;
     return Response.json(body, { status: error.status, headers: { ...error.headers, ...extraHeaders } });
   }
-  console.error(error);
+  currentLog().error({ err: error }, 'unexpected error; answered 500');
   return Response.json({ error: 'Something went wrong on our side. Please try again.' }, { status: 500, headers: extraHeaders });
 }

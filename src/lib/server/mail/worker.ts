@@ -1,5 +1,6 @@
 import type { MikroORM } from '@mikro-orm/postgresql';
 import { deliverDueMail } from './outbox';
+import { logger } from '../log';
 
 const POLL_MS = 3_000;
 let timer: NodeJS.Timeout | undefined;
@@ -9,7 +10,7 @@ let orm: MikroORM | undefined;
 function pass(): Promise<unknown> {
   if (!orm) return Promise.resolve();
   running ??= deliverDueMail(orm.em.fork())
-    .catch((error) => console.error('mail delivery pass failed:', error))
+    .catch((error) => logger.error({ err: error }, 'mail delivery pass failed'))
     .finally(() => {
       running = undefined;
     });
