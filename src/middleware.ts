@@ -7,6 +7,7 @@ import { csrf } from './lib/server/auth/csrf';
 import { session } from './lib/server/auth/session-middleware';
 import { staffArea } from './lib/server/auth/staff-area';
 import { requestLog } from './lib/server/request-log';
+import { failures } from './lib/server/failures';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
@@ -41,6 +42,8 @@ const securityHeaders = defineMiddleware(async (context, next) => {
   return response;
 });
 
-// Order matters: the request id and log first, so every later step logs with it; then refuse
-// cross-site writes before any work, find the session, and guard /app.
-export const onRequest = sequence(requestLog, requestContext, securityHeaders, csrf, session, staffArea);
+// Order matters: the request id and log first, so every later step logs with it; every answer gets
+// the security headers; `failures` turns whatever is thrown below it (a database outage included,
+// even while the ORM starts) into an answer; then refuse cross-site writes before any work, find
+// the session, and guard /app.
+export const onRequest = sequence(requestLog, securityHeaders, failures, requestContext, csrf, session, staffArea);

@@ -1,3 +1,4 @@
+import { RETRY_AFTER_SECONDS, isUnavailable } from './db/unavailable';
 import { currentLog } from './log';
 
 /**
@@ -61,8 +62,22 @@ export class TooManyRequests extends AppError {
   }
 }
 
-/** Maps any thrown value to a JSON response; unknown errors become a 500 with no detail, logged with the request's id. */
+/** A server we depend on (in practice the database) cannot be reached right now; try again shortly. */
+export class ServiceUnavailable extends AppError {
+  constructor(message = 'We cannot answer right now. Please try again in a moment.') {
+    super(message, 503, undefined, { 'Retry-After': String(RETRY_AFTER_SECONDS) });
+  }
+}
+
+/**
+ * Maps any thrown value to a JSON response. An outage becomes a 503 with Retry-After (logged as a
+ * warning); other unknown errors become a 500 with no detail, logged with the request's id.
+ */
 export function errorResponse(error: unknown, extraHeaders: Record<string, string> = {}): Response {
+  if (!(error instanceof AppError) && isUnavailable(error)) {
+    currentLog().warn({ err: error }, 'a server we depend on is unavailable; answered 503');
+    error = new ServiceUnavailable();
+  }
   if (error instanceof AppError) {
     const body: { error: string; fields?: Record<string, string> } = { error: error.message };
     if (error.fields && Object.keys(error.fields).length) body.fields = error.fields;

@@ -1,5 +1,6 @@
 import type { MikroORM } from '@mikro-orm/postgresql';
 import { deliverDueMail } from './outbox';
+import { isUnavailable } from '../db/unavailable';
 import { logger } from '../log';
 
 const POLL_MS = 3_000;
@@ -10,7 +11,10 @@ let orm: MikroORM | undefined;
 function pass(): Promise<unknown> {
   if (!orm) return Promise.resolve();
   running ??= deliverDueMail(orm.em.fork())
-    .catch((error) => logger.error({ err: error }, 'mail delivery pass failed'))
+    // During a database outage the next pass simply tries again; anything else is a fault to look at.
+    .catch((error) =>
+      isUnavailable(error) ? logger.warn({ err: error }, 'mail delivery pass skipped: database unavailable') : logger.error({ err: error }, 'mail delivery pass failed'),
+    )
     .finally(() => {
       running = undefined;
     });
