@@ -50,6 +50,13 @@ export class Conflict extends AppError {
   }
 }
 
+/** The body is larger than the endpoint reads. The connection is closed after the answer, so the rest is not read. */
+export class PayloadTooLarge extends AppError {
+  constructor(message = 'The request is too large.') {
+    super(message, 413, undefined, { Connection: 'close' });
+  }
+}
+
 export class UnsupportedMediaType extends AppError {
   constructor(message = 'Send JSON (Content-Type: application/json).') {
     super(message, 415);
