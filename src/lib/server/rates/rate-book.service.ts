@@ -5,6 +5,13 @@ import { AppError } from '../errors';
 
 export type PublishedRates = { version: RateBookVersion; rateBook: RateBook };
 
+/** The firm has published no Rate book yet, so it cannot give estimates (503: try them directly). */
+export class RatesNotPublished extends AppError {
+  constructor() {
+    super('This firm has not published its rates yet. Please contact them directly.', 503);
+  }
+}
+
 // A version's numbers never change once published, so its parsed form can be kept per process.
 const parsedByVersion = new Map<string, RateBook>();
 
@@ -22,7 +29,7 @@ export async function publishedRates(em: EntityManager, companyId: string): Prom
     { company: companyId, status: 'published' },
     { orderBy: { number: 'desc' }, cache: [publishedRatesCacheKey(companyId), PUBLISHED_RATES_CACHE_MS] },
   );
-  if (!version) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
+  if (!version) throw new RatesNotPublished();
   let rateBook = parsedByVersion.get(version.id);
   if (!rateBook) {
     rateBook = parseRateBook(version.data);
