@@ -36,8 +36,11 @@ process.on('exit', () => {
   for (const child of children) child.kill('SIGKILL');
 });
 
-/** Starts a long-running child; if it dies while we are not stopping, everything stops. */
-export function startChild(name, command, args, { env, readyLine, onExit }) {
+/**
+ * Starts a long-running child. If it dies while we are not stopping, `onExit` is told: the caller
+ * stops everything, or (with `restarts`) starts it again.
+ */
+export function startChild(name, command, args, { env, readyLine, onExit, restarts = false }) {
   // Detached: a Ctrl-C in the terminal reaches only us, and we stop the children in order.
   const child = spawn(command, args, { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'], detached: true });
   children.add(child);
@@ -55,7 +58,8 @@ export function startChild(name, command, args, { env, readyLine, onExit }) {
       children.delete(child);
       reject(new Error(`${name} exited before it was ready (code ${code}, signal ${signal})`));
       if (!stopping) {
-        process.stderr.write(`\x1b[31m[lapwing]\x1b[0m ${name} stopped unexpectedly (code ${code ?? signal}); stopping everything.\n`);
+        const next = restarts ? 'it will be started again' : 'stopping everything';
+        process.stderr.write(`\x1b[31m[lapwing]\x1b[0m ${name} stopped unexpectedly (code ${code ?? signal}); ${next}.\n`);
         onExit?.(code ?? 1);
       }
     });
