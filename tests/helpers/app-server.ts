@@ -12,6 +12,8 @@ export type AppServer = {
   process: ChildProcess;
   /** Everything the process wrote to stdout and stderr so far. */
   output: () => string;
+  /** The first JSON log line that `match` accepts, waiting for it to arrive (lines can trail the answer they describe). */
+  logLine: (match: (line: Record<string, unknown>) => boolean) => Promise<Record<string, unknown>>;
   /** True while the process runs. */
   alive: () => boolean;
   stop: () => Promise<void>;
@@ -36,10 +38,29 @@ export async function startAppServer(env: NodeJS.ProcessEnv): Promise<AppServer>
     child.stdout!.on('data', watch);
     child.once('exit', (code) => reject(new Error(`The app server exited before listening (code ${code}):\n${output}`)));
   });
+  const findLine = (match: (line: Record<string, unknown>) => boolean) =>
+    output
+      .split('\n')
+      .filter((line) => line.startsWith('{') && line.endsWith('}'))
+      .map((line) => JSON.parse(line) as Record<string, unknown>)
+      .find(match);
   return {
     origin,
     process: child,
     output: () => output,
+    logLine: (match) =>
+      new Promise((resolve, reject) => {
+        const look = () => {
+          const found = findLine(match);
+          if (!found) return false;
+          child.stdout!.off('data', look);
+          resolve(found);
+          return true;
+        };
+        if (look()) return;
+        child.stdout!.on('data', look);
+        child.once('exit', () => reject(new Error(`The app server exited before writing the log line:\n${output}`)));
+      }),
     alive: () => child.exitCode === null && child.signalCode === null,
     stop: async () => {
       if (child.exitCode === null && child.signalCode === null) child.kill('SIGTERM');

@@ -68,7 +68,8 @@ describe('a database restart', () => {
 
   beforeAll(async () => {
     cluster = await openPrivateCluster(process.env);
-    app = await startAppServer({ ...process.env, DATABASE_URL: cluster.url });
+    // At warn, so the outage warnings this test reads are written whatever the run's LOG_LEVEL.
+    app = await startAppServer({ ...process.env, DATABASE_URL: cluster.url, LOG_LEVEL: 'warn' });
   }, 120_000);
 
   afterAll(async () => {
@@ -89,6 +90,12 @@ describe('a database restart', () => {
 
     cluster.stop();
     await expectJson503(await health(app));
+    // The answer and the server's warning about it carry the same request id.
+    const traced = await fetch(`${app.origin}/api/health`, { headers: { 'X-Request-Id': 'outage-check-1' } });
+    expect(traced.status).toBe(503);
+    expect(traced.headers.get('x-request-id')).toBe('outage-check-1');
+    const warning = await app.logLine((line) => line.requestId === 'outage-check-1' && line.level === 40);
+    expect(warning.msg).toMatch(/unavailable/);
     await expectJson503(await postEstimate(app, 'northgate'));
     // A page gets a plain page that says so, never the widget's "not taking estimates" or an empty 500.
     const page = await fetch(`${app.origin}/embed/northgate`);

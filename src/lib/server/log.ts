@@ -1,5 +1,5 @@
 import { AsyncLocalStorage } from 'node:async_hooks';
-import { pino, type Logger } from 'pino';
+import { pino, type DestinationStream, type Logger, type LoggerOptions } from 'pino';
 import { config } from './config';
 
 /**
@@ -31,16 +31,22 @@ const errorLineListeners = new Set<(args: unknown[]) => void>();
 /** pino's number for the error level. */
 const ERROR_LEVEL = 50;
 
-export const logger: Logger = pino({
-  level: config.logLevel,
-  redact: { paths: REDACTED_PATHS, censor: '[redacted]' },
-  hooks: {
-    logMethod(args, method, level) {
-      if (level >= ERROR_LEVEL) for (const listener of errorLineListeners) listener(args);
-      return method.apply(this, args);
+/** A logger with the server's settings; `destination` is stdout unless a test passes its own. */
+export function createLogger(destination?: DestinationStream): Logger {
+  const options: LoggerOptions = {
+    level: config.logLevel,
+    redact: { paths: REDACTED_PATHS, censor: '[redacted]' },
+    hooks: {
+      logMethod(args, method, level) {
+        if (level >= ERROR_LEVEL) for (const listener of errorLineListeners) listener(args);
+        return method.apply(this, args);
+      },
     },
-  },
-});
+  };
+  return destination ? pino(options, destination) : pino(options);
+}
+
+export const logger: Logger = createLogger();
 
 /** Calls `listener` with the arguments of every error-level line from now on; returns a function that stops it. */
 export function onErrorLine(listener: (args: unknown[]) => void): () => void {
