@@ -23,8 +23,33 @@ const { handler } = await import('../dist/server/entry.mjs');
 const { HOST: host, PORT: port } = checked.settings;
 const trustProxy = checked.settings.TRUST_PROXY === 'true';
 
+// Most clients read the answer only once they have sent the whole body. When the app answers
+// without reading all of it (a 413 for a body over its limit, a 429 or 403 before reading), the
+// rest is read and dropped so the client can finish and see the answer; closing the connection
+// instead would show it a broken pipe. Past this much the connection is dropped after all.
+const MAX_DISCARDED_BYTES = 64 * 1024 * 1024;
+
+function discardUnreadBody(req) {
+  if (req.complete || req.destroyed) return;
+  let discarded = 0;
+  const discard = () => {
+    let chunk;
+    while ((chunk = req.read()) !== null) {
+      discarded += chunk.length;
+      if (discarded > MAX_DISCARDED_BYTES) {
+        req.off('readable', discard);
+        req.destroy();
+        return;
+      }
+    }
+  };
+  req.on('readable', discard);
+  discard();
+}
+
 const server = http.createServer((req, res) => {
   if (!trustProxy) delete req.headers['x-forwarded-for'];
+  res.once('finish', () => discardUnreadBody(req));
   handler(req, res);
 });
 server.listen(port, host, () => {

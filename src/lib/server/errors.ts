@@ -50,10 +50,10 @@ export class Conflict extends AppError {
   }
 }
 
-/** The body is larger than the endpoint reads. The connection is closed after the answer, so the rest is not read. */
+/** The body is larger than the endpoint reads; the app reads no more of it (scripts/serve.mjs discards the rest). */
 export class PayloadTooLarge extends AppError {
   constructor(message = 'The request is too large.') {
-    super(message, 413, undefined, { Connection: 'close' });
+    super(message, 413);
   }
 }
 

@@ -8,7 +8,7 @@ const MAX_JSON_BYTES = 256 * 1024;
 /**
  * Reads a body of at most `limit` bytes. A larger declared Content-Length is refused before any of it
  * is read, and a streamed (chunked) body is refused as soon as it passes the limit, so an oversized
- * body never sits in memory. The refusal closes the connection (see PayloadTooLarge).
+ * body never sits in memory. (After the answer, scripts/serve.mjs discards what the client still sends.)
  */
 export async function readLimitedBody(request: Request, limit: number, message: string): Promise<Uint8Array<ArrayBuffer>> {
   const declared = request.headers.get('content-length');
@@ -26,7 +26,7 @@ export async function readLimitedBody(request: Request, limit: number, message: 
       chunks.push(value);
     }
   } finally {
-    // Stop here; whatever is left is not read (the answer closes the connection).
+    // Stop here; whatever is left is not kept.
     reader.releaseLock();
   }
   const body = new Uint8Array(size);
