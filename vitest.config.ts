@@ -7,6 +7,8 @@ export default getViteConfig({
     environment: 'node',
     include: ['src/**/*.test.ts', 'src/**/*.test.tsx', 'tests/unit/**/*.test.ts', 'tests/integration/**/*.test.ts'],
     exclude: ['tests/e2e/**', 'node_modules/**', 'dist/**'],
+    // A test fails when it writes error output it did not declare.
+    setupFiles: ['tests/setup/error-output.ts'],
     testTimeout: 20_000,
     hookTimeout: 30_000,
   },

@@ -9,16 +9,49 @@
 // "Background jobs"). On SIGTERM/SIGINT it stops taking requests and jobs, gives running jobs a
 // few seconds, and exits.
 //
-// Environment: HOST (default 127.0.0.1), PORT (default 4321), TRUST_PROXY.
+// Environment: HOST (default 127.0.0.1), PORT (default 4321), TRUST_PROXY, and the app's settings
+// (src/lib/server/config.ts), all checked before the server listens.
 import http from 'node:http';
+
+// A wrong or missing setting stops the start here, with every bad variable named, rather than
+// surfacing later as failed requests or e-mails that link to the wrong address.
+const { checkEnvironment } = await import('../dist/server/config-check.mjs');
+const checked = checkEnvironment(process.env);
+if (!checked.ok) {
+  process.stderr.write(`${checked.error.message}\n`);
+  process.exit(1);
+}
 
 process.env.ASTRO_NODE_AUTOSTART = 'disabled';
 const { handler } = await import('../dist/server/entry.mjs');
 const { startBackground } = await import('../dist/server/background.mjs');
 
-const host = process.env.HOST || '127.0.0.1';
-const port = Number(process.env.PORT || 4321);
-const trustProxy = process.env.TRUST_PROXY === 'true';
+const { HOST: host, PORT: port } = checked.settings;
+const trustProxy = checked.settings.TRUST_PROXY === 'true';
+
+// Most clients read the answer only once they have sent the whole body. When the app answers
+// without reading all of it (a 413 for a body over its limit, a 429 or 403 before reading), the
+// rest is read and dropped so the client can finish and see the answer; closing the connection
+// instead would show it a broken pipe. Past this much the connection is dropped after all.
+const MAX_DISCARDED_BYTES = 64 * 1024 * 1024;
+
+function discardUnreadBody(req) {
+  if (req.complete || req.destroyed) return;
+  let discarded = 0;
+  const discard = () => {
+    let chunk;
+    while ((chunk = req.read()) !== null) {
+      discarded += chunk.length;
+      if (discarded > MAX_DISCARDED_BYTES) {
+        req.off('readable', discard);
+        req.destroy();
+        return;
+      }
+    }
+  };
+  req.on('readable', discard);
+  discard();
+}
 
 // Built files (dist/client, /widget.js) are answered by the adapter before Astro's middleware runs,
 // so they get their headers here: nothing in them may load anything when opened on their own, and
@@ -33,6 +66,7 @@ const fileHeaders = [
 const server = http.createServer((req, res) => {
   if (!trustProxy) delete req.headers['x-forwarded-for'];
   for (const [name, value] of fileHeaders) res.setHeader(name, value);
+  res.once('finish', () => discardUnreadBody(req));
   handler(req, res);
 });
 server.listen(port, host, () => {

@@ -6,6 +6,7 @@ import { ensureNodeModules, ensurePostgres, fail, log, portInUse, root } from '.
 import { ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
 import { dataDir, devAppSecret, devClusterDir, devPorts } from './lib/dev-cluster.mjs';
 import { appEnv, buildIfNeeded, runDbTasks, startChild, startStandIns, stopChildren } from './lib/services.mjs';
+import { keepRunning } from './lib/supervisor.mjs';
 
 const dev = process.argv.includes('--dev');
 const host = process.env.HOST || '127.0.0.1';
@@ -45,10 +46,13 @@ async function waitForHealth(url, timeoutMs = 120_000) {
 }
 
 let shuttingDown = false;
+/** @type {ReturnType<typeof keepRunning> | undefined} */
+let appSupervisor;
 async function shutdown(code) {
   if (shuttingDown) return;
   shuttingDown = true;
   log('Stopping…');
+  appSupervisor?.stop();
   await stopChildren();
   stopCluster(cluster);
   log('Stopped. The data is kept in .data/ (delete that folder to start over).');
@@ -66,9 +70,18 @@ try {
   const [command, args] = dev
     ? [path.join(root, 'node_modules', '.bin', 'astro'), ['dev', '--host', host, '--port', String(appPort)]]
     : [process.execPath, ['scripts/serve.mjs']];
-  const server = startChild('app server', command, args, { env, onExit: (code) => shutdown(code || 1) });
-  await server.ready;
+  // A crash of the app once it has answered restarts it (with a growing pause, scripts/lib/supervisor.mjs),
+  // leaving PostgreSQL and the stand-ins running; one that never got that far would only fail again.
+  let answered = false;
+  appSupervisor = keepRunning({
+    start: () =>
+      new Promise((resolve) => {
+        startChild('app server', command, args, { env, restarts: true, onExit: (code) => (answered ? resolve(code) : shutdown(code || 1)) });
+      }),
+    onRestart: ({ delayMs }) => log(`Starting the app server again in ${delayMs / 1000} s…`),
+  });
   await waitForHealth(`http://${host}:${appPort}/api/health`);
+  answered = true;
 } catch (error) {
   process.stderr.write(`${error instanceof Error ? error.message : error}\n`);
   await shutdown(1);

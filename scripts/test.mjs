@@ -19,7 +19,10 @@ if (runE2e) ensureChromium();
 
 let failed = false;
 const started = Date.now();
-const { env, cleanUp } = await openThrowawayEnvironment({ onStandInsExit: () => { failed = true; } });
+const throwaway = await openThrowawayEnvironment({ onStandInsExit: () => { failed = true; } });
+const { cleanUp } = throwaway;
+// Server logs below warnings would drown the test report; a test may still ask for more.
+const env = { LOG_LEVEL: 'warn', ...throwaway.env };
 process.on('SIGINT', async () => {
   await cleanUp();
   process.exit(130);
@@ -37,9 +40,10 @@ function step(name, command, args) {
 try {
   const bin = (name) => path.join(root, 'node_modules', '.bin', name);
   if (only === null) step('Type check (astro check)', bin('astro'), ['check']);
+  // Some integration tests run the production server itself (tests/helpers/app-server.ts).
+  buildIfNeeded(env);
   if (runVitest) step('Unit and integration tests (vitest)', bin('vitest'), ['run', ...(only === 'vitest' ? passThrough : [])]);
   if (runE2e) {
-    buildIfNeeded(env);
     step('End-to-end tests (Playwright, Debian Chromium)', bin('playwright'), ['test', ...(only === 'e2e' ? passThrough : [])]);
   }
 } catch (error) {

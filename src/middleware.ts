@@ -8,6 +8,8 @@ import { staffArea } from '~/lib/server/auth/staff-area';
 import { canonicalPaths } from '~/lib/server/auth/canonical-path';
 import { config } from '~/lib/server/config';
 import { STRICT_TRANSPORT_SECURITY, completePolicy, mayBeFramed, mustNotBeStored } from '~/lib/server/security-headers';
+import { requestLog } from '~/lib/server/request-log';
+import { failures } from '~/lib/server/failures';
 
 /** Gives every request its own EntityManager; the global one is never used for request work. */
 const requestContext = defineMiddleware(async (context, next) => {
@@ -41,6 +43,8 @@ const securityHeaders = defineMiddleware(async (context, next) => {
   return response;
 });
 
-// Order matters: refuse other spellings of a path before any guard reads it, then cross-site writes,
-// then find the session, then guard /app.
-export const onRequest = sequence(requestContext, securityHeaders, canonicalPaths, csrf, session, staffArea);
+// Order matters: the request id and log first, so every later step logs with it; every answer gets
+// the security headers; `failures` turns whatever is thrown below it (a database outage included,
+// even while the ORM starts) into an answer; then refuse other spellings of a path before any guard
+// reads it, refuse cross-site writes, find the session, and guard /app.
+export const onRequest = sequence(requestLog, securityHeaders, failures, requestContext, canonicalPaths, csrf, session, staffArea);

@@ -36,8 +36,11 @@ process.on('exit', () => {
   for (const child of children) child.kill('SIGKILL');
 });
 
-/** Starts a long-running child; if it dies while we are not stopping, everything stops. */
-export function startChild(name, command, args, { env, readyLine, onExit }) {
+/**
+ * Starts a long-running child. If it dies while we are not stopping, `onExit` is told: the caller
+ * stops everything, or (with `restarts`) starts it again.
+ */
+export function startChild(name, command, args, { env, readyLine, onExit, restarts = false }) {
   // Detached: a Ctrl-C in the terminal reaches only us, and we stop the children in order.
   const child = spawn(command, args, { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'], detached: true });
   children.add(child);
@@ -55,7 +58,8 @@ export function startChild(name, command, args, { env, readyLine, onExit }) {
       children.delete(child);
       reject(new Error(`${name} exited before it was ready (code ${code}, signal ${signal})`));
       if (!stopping) {
-        process.stderr.write(`\x1b[31m[lapwing]\x1b[0m ${name} stopped unexpectedly (code ${code ?? signal}); stopping everything.\n`);
+        const next = restarts ? 'it will be started again' : 'stopping everything';
+        process.stderr.write(`\x1b[31m[lapwing]\x1b[0m ${name} stopped unexpectedly (code ${code ?? signal}); ${next}.\n`);
         onExit?.(code ?? 1);
       }
     });
@@ -95,8 +99,11 @@ export function runDbTasks(env, tasks) {
   if (result.status !== 0) fail(`Database tasks (${tasks.join(', ')}) failed.`);
 }
 
+// Written from widget/ whenever Astro starts (vitest's config too), so its time says nothing about the build.
+const GENERATED = new Set([path.join(root, 'public', 'widget.js')]);
+
 function newestMtime(target) {
-  if (!existsSync(target)) return 0;
+  if (!existsSync(target) || GENERATED.has(target)) return 0;
   const stat = statSync(target);
   if (!stat.isDirectory()) return stat.mtimeMs;
   let newest = stat.mtimeMs;
@@ -107,7 +114,7 @@ function newestMtime(target) {
 /** Builds the production server when any of its inputs is newer than the last build. */
 export function buildIfNeeded(env, { force = false } = {}) {
   const entry = path.join(root, 'dist', 'server', 'entry.mjs');
-  const inputs = ['src', 'public', 'widget', 'migrations', 'astro.config.mjs', 'tailwind.config.mjs', 'package-lock.json'];
+  const inputs = ['src', 'public', 'widget', 'migrations', 'astro.config.mjs', 'tailwind.config.mjs', 'package-lock.json', 'scripts/lib/config-check.mjs'];
   const builtAt = existsSync(entry) ? statSync(entry).mtimeMs : 0;
   if (!force && builtAt > Math.max(...inputs.map((input) => newestMtime(path.join(root, input))))) return;
   log('Building the app (astro build)…');

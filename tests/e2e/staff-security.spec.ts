@@ -67,7 +67,7 @@ test('bad sign-in input gets a clear message and a 4xx, never a 500', async () =
   expect(await malformed.text()).toContain('Enter an e-mail address like name@example.com.');
 
   const huge = await client.post('/login', { form: { email: 'olive@cedar-hollow.test', password: 'x'.repeat(10 * 1024 * 1024) } });
-  expect(huge.status()).toBe(400);
+  expect(huge.status()).toBe(413);
   expect(await huge.text()).toContain('The form is too large to read.');
 
   const long = await client.post('/login', { form: { email: 'olive@cedar-hollow.test', password: 'x'.repeat(129) } });

@@ -1,3 +1,6 @@
+import { RETRY_AFTER_SECONDS, isUnavailable } from './db/unavailable';
+import { currentLog } from './log';
+
 /**
  * The one error vocabulary of the server. Domain code throws these; `errorResponse()` maps them to a
  * status and the public JSON shape `{"error": "...", "fields": {"path": "message"}}`.
@@ -54,6 +57,13 @@ export class UnprocessableContent extends AppError {
   }
 }
 
+/** The body is larger than the endpoint reads; the app reads no more of it (scripts/serve.mjs discards the rest). */
+export class PayloadTooLarge extends AppError {
+  constructor(message = 'The request is too large.') {
+    super(message, 413);
+  }
+}
+
 export class UnsupportedMediaType extends AppError {
   constructor(message = 'Send JSON (Content-Type: application/json).') {
     super(message, 415);
@@ -66,13 +76,27 @@ export class TooManyRequests extends AppError {
   }
 }
 
-/** Maps any thrown value to a JSON response; unknown errors become a logged 500 with no detail. */
+/** A server we depend on (in practice the database) cannot be reached right now; try again shortly. */
+export class ServiceUnavailable extends AppError {
+  constructor(message = 'We cannot answer right now. Please try again in a moment.') {
+    super(message, 503, undefined, { 'Retry-After': String(RETRY_AFTER_SECONDS) });
+  }
+}
+
+/**
+ * Maps any thrown value to a JSON response. An outage becomes a 503 with Retry-After (logged as a
+ * warning); other unknown errors become a 500 with no detail, logged with the request's id.
+ */
 export function errorResponse(error: unknown, extraHeaders: Record<string, string> = {}): Response {
+  if (!(error instanceof AppError) && isUnavailable(error)) {
+    currentLog().warn({ err: error }, 'a server we depend on is unavailable; answered 503');
+    error = new ServiceUnavailable();
+  }
   if (error instanceof AppError) {
     const body: { error: string; fields?: Record<string, string> } = { error: error.message };
     if (error.fields && Object.keys(error.fields).length) body.fields = error.fields;
     return Response.json(body, { status: error.status, headers: { ...error.headers, ...extraHeaders } });
   }
-  console.error(error);
+  currentLog().error({ err: error }, 'unexpected error; answered 500');
   return Response.json({ error: 'Something went wrong on our side. Please try again.' }, { status: 500, headers: extraHeaders });
 }

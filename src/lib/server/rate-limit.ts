@@ -1,7 +1,6 @@
 import { createHash } from 'node:crypto';
-import pg from 'pg';
 import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
-import { config } from './config';
+import { getOrm } from './db/orm';
 import { TooManyRequests } from './errors';
 
 /**
@@ -31,14 +30,6 @@ export type Limiter = {
   reset(key: string): Promise<void>;
 };
 
-let pool: pg.Pool | undefined;
-
-/** One small pool for every limiter of this process, opened on first use. */
-function limiterPool(): pg.Pool {
-  pool ??= new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
-  return pool;
-}
-
 /**
  * Keys are hashed before they are stored, so the table holds no e-mail or IP addresses.
  * The name keeps one limiter's keys apart from another's.
@@ -49,12 +40,18 @@ function storedKey(key: string): string {
 
 const limiters = new Map<string, RateLimiterPostgres>();
 
-function store(name: string, options: LimiterOptions): RateLimiterPostgres {
+/**
+ * The counters use the ORM's own connection pool (knex's), so a process has one pool: it drops a
+ * connection the server ended (a restart, 57P01) and opens a fresh one, where a pool of our own
+ * would need the same care.
+ */
+async function store(name: string, options: LimiterOptions): Promise<RateLimiterPostgres> {
   let found = limiters.get(name);
   if (!found) {
+    const knex = (await getOrm()).em.getConnection().getKnex();
     found = new RateLimiterPostgres({
-      storeClient: limiterPool(),
-      storeType: 'pool',
+      storeClient: knex,
+      storeType: 'knex',
       tableName: 'rate_limit',
       tableCreated: true,
       keyPrefix: name,
@@ -72,23 +69,23 @@ export function limiter(name: string, options: LimiterOptions): Limiter {
   return {
     async consume(key, message, points = 1) {
       try {
-        await counters().consume(storedKey(key), points);
+        await (await counters()).consume(storedKey(key), points);
       } catch (refusal) {
         if (refusal instanceof RateLimiterRes) throw new TooManyRequests(message, refusal.msBeforeNext / 1000);
         throw refusal;
       }
     },
     async used(key) {
-      const state = await counters().get(storedKey(key));
+      const state = await (await counters()).get(storedKey(key));
       return state?.consumedPoints ?? 0;
     },
     async refusedFor(key) {
-      const state = await counters().get(storedKey(key));
+      const state = await (await counters()).get(storedKey(key));
       if (!state || state.consumedPoints < options.points) return 0;
       return Math.max(1, Math.ceil(state.msBeforeNext / 1000));
     },
     async reset(key) {
-      await counters().delete(storedKey(key));
+      await (await counters()).delete(storedKey(key));
     },
   };
 }

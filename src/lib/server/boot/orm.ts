@@ -18,12 +18,26 @@ export const migrationsList = Object.entries(migrationModules)
 
 let ormPromise: Promise<MikroORM> | undefined;
 
-/** The process-wide ORM, initialised on first use. Requests use forks of its EntityManager. */
+/**
+ * The process-wide ORM, initialised on first use. Requests use forks of its EntityManager.
+ * A failed start (the database is down when the process starts) is forgotten, so the next request
+ * tries again instead of the process failing for good.
+ */
 export function getOrm(): Promise<MikroORM> {
   ormPromise ??= (async () => {
     const { default: options } = await import('../../../../mikro-orm.config');
-    return MikroORM.init({ ...options, migrations: { ...options.migrations, migrationsList } });
-  })();
+    const orm = await MikroORM.init({ ...options, connect: false, migrations: { ...options.migrations, migrationsList } });
+    try {
+      await orm.connect();
+    } catch (error) {
+      await orm.close(true).catch(() => undefined);
+      throw error;
+    }
+    return orm;
+  })().catch((error: unknown) => {
+    ormPromise = undefined;
+    throw error;
+  });
   return ormPromise;
 }
 

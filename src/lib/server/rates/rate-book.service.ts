@@ -6,6 +6,13 @@ import { AppError } from '../errors';
 
 export type PublishedRates = { version: RateBookVersion; rateBook: RateBook };
 
+/** The firm has published no Rate book yet, so it cannot give estimates (503: try them directly). */
+export class RatesNotPublished extends AppError {
+  constructor() {
+    super('This firm has not published its rates yet. Please contact them directly.', 503);
+  }
+}
+
 // A version's numbers never change once published, so its parsed form can be kept per process.
 const parsedByVersion = new Map<string, RateBook>();
 
@@ -19,7 +26,7 @@ export const publishedRatesCacheKey = (companyId: string) => `published-rates:${
 /** The firm's published Rate book, parsed. A firm without one cannot give estimates yet (503). */
 export async function publishedRates(em: EntityManager, companyId: string): Promise<PublishedRates> {
   const published = await publishedRatesIfAny(em, companyId);
-  if (!published) throw new AppError('This firm has not published its rates yet. Please contact them directly.', 503);
+  if (!published) throw new RatesNotPublished();
   return published;
 }
 
