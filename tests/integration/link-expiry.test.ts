@@ -1,6 +1,7 @@
 import { afterAll, afterEach, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import { getOrm } from '../../src/lib/server/boot/orm';
+import { afterResponseSettled } from '../../src/lib/server/after-response';
 import { completePasswordReset, readPasswordReset, requestPasswordReset, RESET_PROBLEMS } from '../../src/lib/server/auth/password-reset';
 import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
 import { acceptInvite, LINK_PROBLEMS, readInvite } from '../../src/lib/server/team/invite-acceptance';
@@ -61,6 +62,7 @@ describe('links expire by the server’s clock', () => {
     const { members } = await buildFirm(em(), [{ name: 'Ivo', role: 'sales' }], { timeZone: 'America/Chicago' });
     const ivo = members[0]!;
     await requestPasswordReset(em(), { email: ivo.email, address: anAddress() });
+    await afterResponseSettled();
     const mail = await queuedMailTo(ivo.email);
     // Source: IANA tz database, northamerica: CST is UTC-6, so 02:19 UTC is 8:19 PM the evening before.
     expect(mail.textBody).toContain('expires on Tue, Dec 1, 2026, 8:19 PM CST.');
@@ -82,6 +84,7 @@ describe('links expire by the server’s clock', () => {
     setup.create(Membership, { company: berlin.company.id, user: uri.user.id, role: 'sales' });
     await setup.flush();
     await requestPasswordReset(em(), { email: uri.email, address: anAddress() });
+    await afterResponseSettled();
     expect((await queuedMailTo(uri.email)).textBody).toContain('expires on Wed, Dec 2, 2026, 2:19 AM UTC.');
   });
 });

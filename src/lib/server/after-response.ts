@@ -4,12 +4,14 @@
  * this process; a failure is logged. Anything that must survive a crash belongs in a table the work
  * writes to (such as the mail outbox), not here.
  */
+import { currentLog } from './log';
+
 const pending = new Set<Promise<void>>();
 
 export function afterResponse(name: string, work: () => Promise<void>): void {
   const run: Promise<void> = new Promise<void>((resolve) => setImmediate(resolve))
     .then(work)
-    .catch((error: unknown) => console.error(`${name} (after the response) failed:`, error))
+    .catch((error: unknown) => currentLog().error({ err: error }, `${name} (after the response) failed`))
     .finally(() => pending.delete(run));
   pending.add(run);
 }

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
-import { getOrm } from './db/orm';
+import { currentOrm } from './db/orm-provider';
 import { TooManyRequests } from './errors';
 
 /**
@@ -48,7 +48,7 @@ const limiters = new Map<string, RateLimiterPostgres>();
 async function store(name: string, options: LimiterOptions): Promise<RateLimiterPostgres> {
   let found = limiters.get(name);
   if (!found) {
-    const knex = (await getOrm()).em.getConnection().getKnex();
+    const knex = (await currentOrm()).em.getConnection().getKnex();
     found = new RateLimiterPostgres({
       storeClient: knex,
       storeType: 'knex',
