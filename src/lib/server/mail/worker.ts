@@ -20,11 +20,11 @@ function pass(): Promise<unknown> {
 export function startMailWorker(appOrm: MikroORM): void {
   if (timer) return;
   orm = appOrm;
-  timer = setInterval(pass, POLL_MS);
+  timer = setInterval(() => void pass(), POLL_MS);
   timer.unref();
 }
 
 /** Asks for a delivery pass right away, after the caller's transaction has committed. */
 export function kickMailDelivery(): void {
-  setTimeout(pass, 10).unref();
+  setTimeout(() => void pass(), 10).unref();
 }
