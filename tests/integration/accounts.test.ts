@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import { getOrm } from '../../src/lib/server/boot/orm';
-import { deliverDueMail } from '../../src/lib/server/mail/outbox';
 import { User } from '../../src/lib/server/users/user.entity';
 import { Membership } from '../../src/lib/server/users/membership.entity';
 import { hashPassword, verifyPassword } from '../../src/lib/server/users/password';
@@ -19,6 +18,7 @@ import { changeRole, inviteToTeam, listTeam, removeMember } from '../../src/lib/
 import { Conflict, InvalidInput, NotFound, TooManyRequests } from '../../src/lib/server/errors';
 import { ACCOUNT_LIMIT } from '../../src/lib/server/auth/sign-in-throttle';
 import { mailTo, waitForMail } from '../helpers/mailbox';
+import { deliverMailTo } from '../helpers/outbox';
 import { buildFirm, linkToken } from '../helpers/accounts';
 
 let orm: MikroORM;
@@ -151,7 +151,7 @@ describe('team', () => {
     const { members, company, tag } = await buildFirm(em(), [{ name: 'Pia', role: 'owner' }]);
     const email = `newcomer-${tag}@firm.test`;
     await inviteToTeam(em(), { companyId: company.id, invitedById: members[0].user.id, email, role: 'sales' });
-    await deliverDueMail(em());
+    await deliverMailTo(em(), email);
     const mail = await waitForMail({ to: email, subject: `Join ${company.name}` });
     expect(mail.text).toContain('Pia has invited you');
     const token = linkToken(mail.text, 'invite');
@@ -174,7 +174,7 @@ describe('team', () => {
     const { members, company, tag } = await buildFirm(em(), [{ name: 'Quin', role: 'owner' }]);
     const email = `late-${tag}@firm.test`;
     const invite = await inviteToTeam(em(), { companyId: company.id, invitedById: members[0].user.id, email, role: 'owner' });
-    await deliverDueMail(em());
+    await deliverMailTo(em(), email);
     const token = linkToken((await waitForMail({ to: email })).text, 'invite');
     await em().nativeUpdate(Invite, { id: invite.id }, { expiresAt: new Date(Date.now() - 1000) });
     expect(await readInvite(em(), token)).toEqual({ state: 'expired' });
@@ -188,7 +188,7 @@ describe('team', () => {
     const second = await buildFirm(em(), [{ name: 'Sol', role: 'owner' }]);
     const rae = first.members[0];
     await inviteToTeam(em(), { companyId: second.company.id, invitedById: second.members[0].user.id, email: rae.email, role: 'sales' });
-    await deliverDueMail(em());
+    await deliverMailTo(em(), rae.email);
     const token = linkToken((await waitForMail({ to: rae.email, subject: second.company.name })).text, 'invite');
     expect(await readInvite(em(), token)).toMatchObject({ state: 'open', hasAccount: true });
     await expect(acceptInvite(em(), token, { password: 'not her password' })).rejects.toMatchObject({ fields: { password: 'That is not your Lapwing password.' } });
@@ -238,7 +238,7 @@ describe('password reset', () => {
     const [abe] = members;
     const session = await startSession(abe.user.id, company.id);
     await requestPasswordReset(em(), { email: abe.email, address: anAddress() });
-    await deliverDueMail(em());
+    await deliverMailTo(em(), abe.email);
     const mail = await waitForMail({ to: abe.email, subject: 'Choose a new Lapwing password' });
     const token = linkToken(mail.text, 'reset');
     expect(await em().count(PasswordReset, { tokenDigest: token })).toBe(0);
@@ -254,12 +254,12 @@ describe('password reset', () => {
   test('an unknown address gets the same quiet answer and no e-mail; an expired link is refused', async () => {
     const nobody = `nobody-${Date.now()}@firm.test`;
     await expect(requestPasswordReset(em(), { email: nobody, address: anAddress() })).resolves.toBeUndefined();
-    await deliverDueMail(em());
+    await deliverMailTo(em(), nobody);
     expect(await mailTo(nobody)).toEqual([]);
 
     const { members } = await buildFirm(em(), [{ name: 'Bea', role: 'owner' }]);
     await requestPasswordReset(em(), { email: members[0].email, address: anAddress() });
-    await deliverDueMail(em());
+    await deliverMailTo(em(), members[0].email);
     const token = linkToken((await waitForMail({ to: members[0].email })).text, 'reset');
     await em().nativeUpdate(PasswordReset, { user: members[0].user.id }, { expiresAt: new Date(Date.now() - 1000) });
     expect(await readPasswordReset(em(), token)).toBe('expired');

@@ -1,4 +1,4 @@
-import { LockMode } from '@mikro-orm/core';
+import { LockMode, type FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { Company } from '../companies/company.entity';
 import { OutboxMail } from './outbox-mail.entity';
@@ -38,18 +38,19 @@ export function enqueueMail(em: EntityManager, message: MailMessage): OutboxMail
 
 /**
  * Sends every queued message that is due. Rows are claimed with FOR UPDATE SKIP LOCKED, so several
- * app processes can run this at once without sending a message twice.
+ * app processes can run this at once without sending a message twice. `only` narrows a pass to some
+ * rows (tests deliver just their own mail: their files share one database and run in parallel).
  */
 export async function deliverDueMail(
   em: EntityManager,
-  { limit = 25, send = sendOne }: { limit?: number; send?: SendMail } = {},
+  { limit = 25, send = sendOne, only }: { limit?: number; send?: SendMail; only?: FilterQuery<OutboxMail> } = {},
 ): Promise<{ sent: number; failed: number }> {
   let sent = 0;
   let failed = 0;
   await em.fork().transactional(async (tx) => {
     const due = await tx.find(
       OutboxMail,
-      { status: 'queued', nextAttemptAt: { $lte: new Date() } },
+      { $and: [{ status: 'queued', nextAttemptAt: { $lte: new Date() } }, only ?? {}] },
       { orderBy: { createdAt: 'asc' }, limit, lockMode: LockMode.PESSIMISTIC_PARTIAL_WRITE },
     );
     for (const mail of due) {
