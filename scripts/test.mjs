@@ -1,5 +1,6 @@
 // `npm test`: every test on a throwaway database and stand-ins, on free loopback ports.
-//   npm test                      type check, vitest (unit + integration), then Playwright on a production build
+//   npm test                      type check, lint (ESLint), format check (Prettier), vitest (unit + integration),
+//                                 then Playwright on a production build
 //   npm test -- --only vitest [vitest args]   or   npm test -- --only e2e [playwright args]
 import { spawnSync } from 'node:child_process';
 import path from 'node:path';
@@ -39,7 +40,12 @@ function step(name, command, args) {
 
 try {
   const bin = (name) => path.join(root, 'node_modules', '.bin', name);
-  if (only === null) step('Type check (astro check)', bin('astro'), ['check']);
+  if (only === null) {
+    step('Type check (astro check)', bin('astro'), ['check']);
+    // `npm run lint` is these two; separate steps, so a formatting failure is visible by name.
+    step('Lint (eslint)', bin('eslint'), ['.']);
+    step('Format check (prettier --check)', bin('prettier'), ['--check', '.']);
+  }
   // Some integration tests run the production server itself (tests/helpers/app-server.ts).
   buildIfNeeded(env);
   if (runVitest) step('Unit and integration tests (vitest)', bin('vitest'), ['run', ...(only === 'vitest' ? passThrough : [])]);

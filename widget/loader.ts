@@ -94,5 +94,5 @@
     } else panel.style.display = 'flex';
     button.setAttribute('aria-expanded', 'true');
   });
-  (document.body ? Promise.resolve() : new Promise((r) => addEventListener('DOMContentLoaded', r))).then(() => document.body.appendChild(button));
+  void (document.body ? Promise.resolve() : new Promise((r) => addEventListener('DOMContentLoaded', r))).then(() => document.body.appendChild(button));
 })();

@@ -23,7 +23,7 @@ test('wall drawings render to scale with boards, openings and a text alternative
 
   // The screenshot is a real picture, not a blank box: several distinct tones (ink, wood, white).
   const png = await figures.nth(0).screenshot();
-  test.info().attach('dining-room-wall.png', { body: png, contentType: 'image/png' });
+  await test.info().attach('dining-room-wall.png', { body: png, contentType: 'image/png' });
   const { channels } = await sharp(png).stats();
   expect(channels[0]!.stdev).toBeGreaterThan(10);
 });

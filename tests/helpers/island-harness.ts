@@ -4,7 +4,7 @@
  * endpoint handlers (real database, real storage). It listens on the app's public origin, so the S3
  * stand-in's CORS rule for that origin applies exactly as in production.
  */
-import { createServer, type IncomingMessage, type Server } from 'node:http';
+import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import path from 'node:path';
 import type { APIRoute } from 'astro';
 import type { EntityManager } from '@mikro-orm/postgresql';
@@ -65,7 +65,7 @@ export async function startIslandHarness({
   const [script, css] = await Promise.all([bundle(entrySource), appStylesheet()]);
   const page = `<!doctype html><html lang="en" style="--brand:#2F6B4F;--brand-text:#ffffff"><head><meta charset="utf-8"><title>Island</title><style>${css}</style></head><body><main id="root" class="p-4"></main><script type="module" src="/island.js"></script></body></html>`;
 
-  const server: Server = createServer(async (request, response) => {
+  const answer = async (request: IncomingMessage, response: ServerResponse) => {
     const url = new URL(request.url ?? '/', origin);
     if (request.method === 'GET' && url.pathname === '/') {
       response.writeHead(200, { 'content-type': 'text/html; charset=utf-8' }).end(page);
@@ -92,6 +92,13 @@ export async function startIslandHarness({
       return;
     }
     response.writeHead(404, { 'content-type': 'text/plain' }).end('not found');
+  };
+  // A failure inside the harness answers 500 with its stack, rather than leaving the browser waiting.
+  const server: Server = createServer((request, response) => {
+    answer(request, response).catch((error: unknown) => {
+      if (!response.headersSent) response.writeHead(500, { 'content-type': 'text/plain' });
+      response.end(error instanceof Error ? (error.stack ?? error.message) : String(error));
+    });
   });
   const { hostname, port } = new URL(origin);
   await new Promise<void>((resolve, reject) => {

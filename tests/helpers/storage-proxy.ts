@@ -30,7 +30,8 @@ export async function startStorageProxy(target: string, bucket: string): Promise
     // Read the whole body first, so the hook runs while the app is waiting for its answer.
     const chunks: Buffer[] = [];
     req.on('data', (chunk: Buffer) => chunks.push(chunk));
-    req.on('end', async () => {
+    req.on('end', () => void forward());
+    const forward = async () => {
       try {
         await proxy.before?.(request);
         const forwarded = http.request(
@@ -38,7 +39,7 @@ export async function startStorageProxy(target: string, bucket: string): Promise
           (answer) => {
             const body: Buffer[] = [];
             answer.on('data', (chunk: Buffer) => body.push(chunk));
-            answer.on('end', async () => {
+            const finish = async () => {
               try {
                 await proxy.after?.(request, answer.statusCode ?? 0);
               } catch (error) {
@@ -46,7 +47,8 @@ export async function startStorageProxy(target: string, bucket: string): Promise
               }
               res.writeHead(answer.statusCode ?? 502, answer.headers);
               res.end(Buffer.concat(body));
-            });
+            };
+            answer.on('end', () => void finish());
           },
         );
         forwarded.on('error', () => res.writeHead(502).end());
@@ -55,7 +57,7 @@ export async function startStorageProxy(target: string, bucket: string): Promise
         console.error('storage proxy hook failed:', error);
         res.writeHead(502).end();
       }
-    });
+    };
   });
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
   proxy.endpoint = `http://127.0.0.1:${(server.address() as { port: number }).port}`;

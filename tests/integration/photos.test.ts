@@ -166,18 +166,16 @@ describe('photos that pass', () => {
     expect(minutes).toBeLessThanOrEqual(10);
   });
 
-  test('a 12-megapixel camera original (a browser that could not shrink it) is checked in a few seconds', async () => {
+  // How long this takes is measured by bench/photo-check.bench.ts (`npm run bench photo`), not here.
+  test('a 12-megapixel camera original (a browser that could not shrink it) is accepted and fitted to 2,000 px', async () => {
     const w = widget(firm);
     const original = await twelveMegapixelJpeg();
     const asked = (await (await w.request({ name: 'IMG_4000.jpg', size: original.length, type: 'image/jpeg' })).json()) as any;
     expect((await uploadLikeABrowser(asked.upload, original)).ok).toBe(true);
-    const started = performance.now();
     const completed = await w.complete(asked.photo.id);
-    const elapsedMs = performance.now() - started;
     expect(completed.status).toBe(200);
+    // 4000 × 3000 fitted to a 2,000 px long edge keeps the 4:3 shape.
     expect(((await completed.json()) as any).photo).toMatchObject({ width: 2000, height: 1500 });
-    // A homeowner waits for this step; common practice, no source.
-    expect(elapsedMs).toBeLessThan(5000);
   });
 
   test('completing twice answers the same photo', async () => {

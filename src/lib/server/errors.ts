@@ -1,4 +1,4 @@
-import { RETRY_AFTER_SECONDS, isUnavailable } from './db/unavailable';
+import { RETRY_AFTER_SECONDS, isUnavailable } from './unavailable';
 import { currentLog } from './log';
 
 /**

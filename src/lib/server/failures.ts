@@ -1,5 +1,5 @@
 import { defineMiddleware } from 'astro:middleware';
-import { isUnavailable, RETRY_AFTER_SECONDS } from './db/unavailable';
+import { isUnavailable, RETRY_AFTER_SECONDS } from './unavailable';
 import { AppError, errorResponse } from './errors';
 import { currentLog } from './log';
 

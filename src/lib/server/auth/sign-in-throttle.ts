@@ -27,9 +27,19 @@ export async function beforeSignInAttempt(email: string, address: string): Promi
   const [accountWait, addressWait] = await Promise.all([perAccount.refusedFor(email), perAddress.refusedFor(address)]);
   if (accountWait) throw new TooManyRequests(`Too many failed sign-ins for this account. Try again in ${minutes(accountWait)}, or reset your password.`, accountWait);
   if (addressWait) throw new TooManyRequests(`Too many failed sign-ins from your network. Try again in ${minutes(addressWait)}.`, addressWait);
-  const failures = await perAccount.used(email);
-  if (failures >= SLOW_AFTER) await delay(Math.min((failures - SLOW_AFTER + 1) * 250, 2000));
+  const wait = slowDownMs(await perAccount.used(email));
+  if (wait > 0) await slowDown.wait(wait);
 }
+
+/** How long an attempt waits after `failures` failed ones: 250 ms more per failure past SLOW_AFTER, at most 2 s. */
+export function slowDownMs(failures: number): number {
+  return failures >= SLOW_AFTER ? Math.min((failures - SLOW_AFTER + 1) * 250, 2000) : 0;
+}
+
+/** The wait itself, in an object so that a test can see the waits asked for without spending them. */
+export const slowDown = {
+  wait: (ms: number): Promise<void> => new Promise((resolve) => setTimeout(resolve, ms)),
+};
 
 /** Counts a failure; the failure that uses up the last point is answered with the refusal itself. */
 export async function afterFailedSignIn(email: string, address: string): Promise<void> {
@@ -39,8 +49,4 @@ export async function afterFailedSignIn(email: string, address: string): Promise
 
 export async function afterSuccessfulSignIn(email: string): Promise<void> {
   await perAccount.reset(email);
-}
-
-function delay(ms: number): Promise<void> {
-  return new Promise((resolve) => setTimeout(resolve, ms));
 }

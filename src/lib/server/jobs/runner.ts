@@ -63,6 +63,8 @@ export async function sendJobIfRunning(name: string, data: object = {}, options:
 export type StartOptions = {
   orm: MikroORM;
   connectionString: string;
+  // Each job has its own data type; the runner hands every job the data it was sent with.
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
   jobs: readonly JobDefinition<any>[];
   /** Connections pg-boss may open besides the ORM's pool (its polling, cron and maintenance). */
   maxConnections?: number;

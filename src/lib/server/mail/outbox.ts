@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { LockMode } from '@mikro-orm/core';
+import { LockMode, type FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { config } from '../config';
 import { Company } from '../companies/company.entity';
@@ -49,6 +49,8 @@ export type DeliveryOptions = {
   send?: SendMail;
   /** The clock (tests pass a later one to act after a claim has lapsed). */
   now?: () => Date;
+  /** Only rows that also match this (tests running side by side deliver their own mail only). */
+  only?: FilterQuery<OutboxMail>;
 };
 
 export type DeliveryResult = { sent: number; failed: number; claimed: number };
@@ -69,7 +71,7 @@ export type DeliveryResult = { sent: number; failed: number; claimed: number };
  */
 export async function deliverDueMail(
   em: EntityManager,
-  { limit = 40, concurrency = 4, timeoutMs = 20_000, send = sendOne, now = () => new Date() }: DeliveryOptions = {},
+  { limit = 40, concurrency = 4, timeoutMs = 20_000, send = sendOne, now = () => new Date(), only }: DeliveryOptions = {},
 ): Promise<DeliveryResult> {
   const result: DeliveryResult = { sent: 0, failed: 0, claimed: 0 };
   // The deadline outlasts the send's own timeout by a margin, so a live pass never loses its claim.
@@ -80,7 +82,7 @@ export async function deliverDueMail(
   const lane = async () => {
     while (budget > 0) {
       budget -= 1;
-      const claim = await claimNext(em.fork(), now(), claimMs);
+      const claim = await claimNext(em.fork(), now(), claimMs, only);
       if (!claim) return;
       result.claimed += 1;
       const message = { to: claim.toAddress, subject: claim.subject, text: claim.textBody, html: claim.htmlBody ?? undefined, replyTo: claim.replyTo ?? undefined, messageId: claim.messageId! };
@@ -109,11 +111,12 @@ export async function nextMailDueAt(em: EntityManager): Promise<Date | null> {
 }
 
 /** Takes the oldest due message (or one whose claim has lapsed) for this pass, in its own short transaction. */
-async function claimNext(em: EntityManager, now: Date, claimMs: number): Promise<OutboxMail | null> {
+async function claimNext(em: EntityManager, now: Date, claimMs: number, only?: FilterQuery<OutboxMail>): Promise<OutboxMail | null> {
+  const due: FilterQuery<OutboxMail> = { $or: [{ status: 'queued', nextAttemptAt: { $lte: now } }, { status: 'sending', claimedUntil: { $lt: now } }] };
   return em.transactional(async (tx) => {
     const [mail] = await tx.find(
       OutboxMail,
-      { $or: [{ status: 'queued', nextAttemptAt: { $lte: now } }, { status: 'sending', claimedUntil: { $lt: now } }] },
+      only ? { $and: [due, only] } : due,
       { orderBy: { createdAt: 'asc' }, limit: 1, lockMode: LockMode.PESSIMISTIC_PARTIAL_WRITE },
     );
     if (!mail) return null;

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
-import { passwordResetMail } from './auth/mails';
-import { inviteMail } from './team/mails';
+import { passwordResetMail } from '~/lib/server/auth/mails';
+import { inviteMail } from '~/lib/server/team/mails';
 
 describe('expiry times in e-mails', () => {
   test('an invitation names its expiry in the firm’s zone, with the zone’s name, across the start of daylight time', () => {

@@ -2,9 +2,9 @@ import { createServer } from 'node:net';
 import { DriverException } from '@mikro-orm/core';
 import pg from 'pg';
 import { describe, expect, test } from 'vitest';
-import { expectErrorOutput } from '../../../../tests/helpers/error-output';
-import { errorResponse } from '../errors';
-import { isUnavailable } from './unavailable';
+import { expectErrorOutput } from '../helpers/error-output';
+import { errorResponse } from '~/lib/server/errors';
+import { isUnavailable } from '~/lib/server/unavailable';
 
 /** The error node-postgres really gives when nothing listens on the port. */
 async function refusedConnectionError(): Promise<Error> {

@@ -1,10 +1,10 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { createElement } from 'react';
 import { describe, expect, it } from 'vitest';
-import { WallDrawing } from '../../../components/drawing/WallDrawing';
+import { WallDrawing } from '~/components/drawing/WallDrawing';
 import { estimate, parseRateBook, sampleRateBook, type WallPiece } from '~/lib/estimate';
 import { biggestAcceptedProject, largeHouse } from '~/lib/estimate/sample-big-projects';
-import { DRAWN_PIECES_BUDGET, drawingPieces, presentForHomeowner } from './present-estimate';
+import { DRAWN_PIECES_BUDGET, drawingPieces, presentForHomeowner } from '~/lib/server/estimates/present-estimate';
 
 const rateBook = parseRateBook(sampleRateBook());
 const run = (p: unknown) => estimate(p, rateBook);

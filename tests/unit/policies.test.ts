@@ -1,11 +1,11 @@
 import { describe, expect, test } from 'vitest';
 import { STAFF_ROLES, type StaffRole } from '~/lib/shared/labels';
-import * as companyPolicies from './companies/policy';
-import * as leadPolicies from './leads/policy';
-import { leadActions } from './leads/present-lead-actions';
-import * as ratePolicies from './rates/policy';
-import * as teamPolicies from './team/policy';
-import type { FirmScoped, Viewer } from './viewer';
+import * as companyPolicies from '~/lib/server/companies/policy';
+import * as leadPolicies from '~/lib/server/leads/policy';
+import { leadActions } from '~/lib/server/leads/present-lead-actions';
+import * as ratePolicies from '~/lib/server/rates/policy';
+import * as teamPolicies from '~/lib/server/team/policy';
+import type { FirmScoped, Viewer } from '~/lib/server/viewer';
 
 const POLICIES: Record<string, (viewer: Viewer, target: FirmScoped) => boolean> = {
   ...companyPolicies,

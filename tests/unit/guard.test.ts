@@ -1,8 +1,8 @@
 import { describe, expect, test } from 'vitest';
-import { Forbidden, NotFound, Unauthenticated } from '../errors';
-import { canSeeLead, canDeleteLead } from '../leads/policy';
-import { canManageTeam } from '../team/policy';
-import { authorize, requireStaff } from './guard';
+import { Forbidden, NotFound, Unauthenticated } from '~/lib/server/errors';
+import { canSeeLead, canDeleteLead } from '~/lib/server/leads/policy';
+import { canManageTeam } from '~/lib/server/team/policy';
+import { authorize, requireStaff } from '~/lib/server/auth/guard';
 
 const FIRM_A = 'a0000000-0000-4000-8000-00000000000a';
 const FIRM_B = 'b0000000-0000-4000-8000-00000000000b';
