@@ -12,7 +12,16 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { tmpdir } from 'node:os';
 import { performance as perf } from 'node:perf_hooks';
-import { estimate, estimateParsed, EstimateInputError, parseRateBook, piecesPerSheet, projectSchema, sampleRateBook, type ProjectInput } from '../src/lib/estimate/index.ts';
+import {
+  estimate,
+  estimateParsed,
+  EstimateInputError,
+  parseRateBook,
+  piecesPerSheet,
+  projectSchema,
+  sampleRateBook,
+  type ProjectInput,
+} from '../src/lib/estimate/index.ts';
 import { biggestAcceptedProject, costliestAcceptedProject, schemaMaximumProject } from '../src/lib/estimate/sample-big-projects.ts';
 import { clearSheetLayoutMemo } from '../src/lib/estimate/sheet-layout.ts';
 import { presentForHomeowner } from '../src/lib/server/estimates/present-estimate.ts';
@@ -174,8 +183,12 @@ console.log(`  six-room estimate, end to end:     median ${figures.estimateMedia
 console.log(`  same, rate book already parsed:    median ${figures.estimateParsedRateBookMedianMs} ms, p95 ${figures.estimateParsedRateBookP95Ms} ms`);
 console.log(`  sheet layout search (cold):        median ${figures.sheetLayoutColdMedianMsPerLayout} ms per layout`);
 console.log(`  biggest project the schema allows (${figures.schemaMaximumRequestBytes} bytes): refused in ${figures.schemaMaximumRefusedMedianMs} ms`);
-console.log(`  biggest accepted project: ${figures.biggestAcceptedOnThreadMedianMs} ms; its answer ${figures.biggestAcceptedAnswerBytes} bytes to the widget (full estimate ${figures.biggestAcceptedFullEstimateBytes} bytes)`);
-console.log(`  costliest accepted project: ${figures.costliestAcceptedOnThreadMedianMs} ms on this thread; on the pool ${figures.costliestAcceptedOnPoolMedianMs} ms, main loop busy ${figures.costliestAcceptedMainLoopBusyMedianMs} ms of it`);
+console.log(
+  `  biggest accepted project: ${figures.biggestAcceptedOnThreadMedianMs} ms; its answer ${figures.biggestAcceptedAnswerBytes} bytes to the widget (full estimate ${figures.biggestAcceptedFullEstimateBytes} bytes)`,
+);
+console.log(
+  `  costliest accepted project: ${figures.costliestAcceptedOnThreadMedianMs} ms on this thread; on the pool ${figures.costliestAcceptedOnPoolMedianMs} ms, main loop busy ${figures.costliestAcceptedMainLoopBusyMedianMs} ms of it`,
+);
 console.log(`  rate book to a worker: structured clone ${figures.rateBookStructuredCloneMedianMs} ms, JSON + parse ${figures.rateBookJsonParseMedianMs} ms`);
 console.log(`  target: under ${TARGET_MS} ms per six-room estimate on one core — ${passed ? 'met' : 'NOT met'}`);
 

@@ -135,7 +135,9 @@ const BENCH_SLUG_PREFIX = 'bench-load-';
 const cedar = (await db.query<{ id: string }>(`select id from company where slug = 'cedar-hollow'`)).rows[0];
 if (!cedar) throw new Error('The demo firm cedar-hollow is missing: the bench environment seeds it.');
 const publishedRow = (
-  await db.query<{ data: unknown }>(`select data from rate_book_version where company_id = $1 and status = 'published' order by number desc limit 1`, [cedar.id])
+  await db.query<{ data: unknown }>(`select data from rate_book_version where company_id = $1 and status = 'published' order by number desc limit 1`, [
+    cedar.id,
+  ])
 ).rows[0];
 if (!publishedRow) throw new Error('cedar-hollow has no published rate book.');
 
@@ -175,7 +177,8 @@ await db.query(
      where v.company_id = $1 and v.status = 'published' and b.slug like $2`,
   [cedar.id, `${BENCH_SLUG_PREFIX}%`],
 );
-const benchFirms = (await db.query<{ id: string; slug: string }>(`select id, slug from company where slug like $1 order by slug`, [`${BENCH_SLUG_PREFIX}%`])).rows;
+const benchFirms = (await db.query<{ id: string; slug: string }>(`select id, slug from company where slug like $1 order by slug`, [`${BENCH_SLUG_PREFIX}%`]))
+  .rows;
 if (benchFirms.length !== BENCH_FIRMS) throw new Error(`Expected ${BENCH_FIRMS} bench firms, found ${benchFirms.length}.`);
 
 /** What a homeowner sends: the sample two-room project (cedar-hollow's catalogue is the sample one). */
@@ -283,7 +286,9 @@ try {
             resolve({
               lcpMs: entry.renderTime || entry.startTime,
               fcpMs: fcp?.startTime ?? NaN,
-              element: el ? `${el.tagName.toLowerCase()}${el.className ? `.${String(el.className).split(/\s+/).slice(0, 3).join('.')}` : ''} (${entry.size} px²)` : '(none)',
+              element: el
+                ? `${el.tagName.toLowerCase()}${el.className ? `.${String(el.className).split(/\s+/).slice(0, 3).join('.')}` : ''} (${entry.size} px²)`
+                : '(none)',
             });
           }).observe({ type: 'largest-contentful-paint', buffered: true });
         }),
@@ -325,7 +330,11 @@ try {
 
   // One request first, to check the answer and compare it with the baseline's.
   const probe = appRequest(0, '127.0.0.1', 0);
-  const probeResponse = await fetch(`${origin}${probe.path}`, { method: 'POST', headers: { 'Content-Type': 'application/json', Origin: origin }, body: new Uint8Array(probe.body) });
+  const probeResponse = await fetch(`${origin}${probe.path}`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', Origin: origin },
+    body: new Uint8Array(probe.body),
+  });
   const probeText = await probeResponse.text();
   if (probeResponse.status !== 200) throw new Error(`The estimate endpoint answered ${probeResponse.status}: ${probeText}`);
   const appRange = (JSON.parse(probeText) as { estimate: { range: { text: string } } }).estimate.range.text;
@@ -333,13 +342,24 @@ try {
   // Service time without queueing: one client, sequential requests.
   const appSerial = await runLoad({ port, connections: 1, warmupMs: 1_000, durationMs: 3_000, next: appRequest, freshAddress, addressBudget });
   const appCpuBefore = cpuSeconds(app.child.pid);
-  const appLoad = await runLoad({ port, connections: CONNECTIONS, warmupMs: WARMUP_MS, durationMs: DURATION_MS, next: appRequest, freshAddress, addressBudget });
+  const appLoad = await runLoad({
+    port,
+    connections: CONNECTIONS,
+    warmupMs: WARMUP_MS,
+    durationMs: DURATION_MS,
+    next: appRequest,
+    freshAddress,
+    addressBudget,
+  });
   const appCpuPerS = (cpuSeconds(app.child.pid) - appCpuBefore) / (appLoad.durationS + WARMUP_MS / 1000);
   await stopChild(app.child);
 
   // -------------------------------------------------------------------------------------------
   // 6. The baseline: bare node:http + the estimating core, the same rate book, loaded identically.
-  bare = startChild('bare', ['--import', 'tsx', join(root, 'bench', 'lib', 'bare-estimate-server.ts')], { ...env, BENCH_RATE_BOOK: JSON.stringify(publishedRow.data) });
+  bare = startChild('bare', ['--import', 'tsx', join(root, 'bench', 'lib', 'bare-estimate-server.ts')], {
+    ...env,
+    BENCH_RATE_BOOK: JSON.stringify(publishedRow.data),
+  });
   const barePort = await new Promise<number>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`The baseline server did not start:\n${bare!.output()}`)), 30_000);
     bare!.child.stdout!.on('data', () => {
@@ -351,14 +371,26 @@ try {
     });
     bare!.child.once('exit', (code) => reject(new Error(`The baseline server exited (code ${code}):\n${bare!.output()}`)));
   });
-  const bareProbe = await fetch(`http://127.0.0.1:${barePort}/`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: new Uint8Array(probe.body) });
+  const bareProbe = await fetch(`http://127.0.0.1:${barePort}/`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: new Uint8Array(probe.body),
+  });
   const bareRange = ((await bareProbe.json()) as { estimate: { range: { text: string } } }).estimate.range.text;
   if (bareRange !== appRange) throw new Error(`The baseline's answer (${bareRange}) differs from the app's (${appRange}).`);
   const bareRequest = (client: number, address: string, sequence: number) => ({ ...appRequest(client, address, sequence), path: '/' });
   firmUse.clear(); // the baseline has no limits; the same bodies are sent
   const bareSerial = await runLoad({ port: barePort, connections: 1, warmupMs: 1_000, durationMs: 3_000, next: bareRequest, freshAddress, addressBudget });
   const bareCpuBefore = cpuSeconds(bare.child.pid);
-  const bareLoad = await runLoad({ port: barePort, connections: CONNECTIONS, warmupMs: WARMUP_MS, durationMs: DURATION_MS, next: bareRequest, freshAddress, addressBudget });
+  const bareLoad = await runLoad({
+    port: barePort,
+    connections: CONNECTIONS,
+    warmupMs: WARMUP_MS,
+    durationMs: DURATION_MS,
+    next: bareRequest,
+    freshAddress,
+    addressBudget,
+  });
   const bareCpuPerS = (cpuSeconds(bare.child.pid) - bareCpuBefore) / (bareLoad.durationS + WARMUP_MS / 1000);
   await stopChild(bare.child);
 
@@ -366,7 +398,14 @@ try {
   // 7. Figures.
   const r1 = (x: number) => Math.round(x * 10) / 10;
   const r2 = (x: number) => Math.round(x * 100) / 100;
-  const loadFigures = (l: LoadResult) => ({ requestsPerS: r1(l.requestsPerS), p50Ms: r2(l.p50Ms), p95Ms: r2(l.p95Ms), p99Ms: r2(l.p99Ms), requests: l.requests, non200: l.non200 + l.errors });
+  const loadFigures = (l: LoadResult) => ({
+    requestsPerS: r1(l.requestsPerS),
+    p50Ms: r2(l.p50Ms),
+    p95Ms: r2(l.p95Ms),
+    p99Ms: r2(l.p99Ms),
+    requests: l.requests,
+    non200: l.non200 + l.errors,
+  });
   const figures = {
     loaderRawBytes: loader.rawBytes,
     loaderGzipBytes: loader.gzipBytes,
@@ -405,17 +444,34 @@ try {
   const mark = (ok: boolean) => (ok ? 'met' : 'NOT met');
 
   console.log('Widget benchmark');
-  console.log(`  loader public/widget.js:     ${kb(loader.rawBytes)} raw, ${kb(loader.gzipBytes)} gzip (target ≤ ${kb(TARGET.loaderGzipBytes)}) — ${mark(met.loader)}`);
-  console.log(`  embed page JavaScript:       ${kb(embedJs.gzipBytes)} gzip, ${kb(embedJs.rawBytes)} raw, ${embedJs.files} files (target ≤ ${kb(TARGET.embedJsGzipBytes)}) — ${mark(met.embedJs)}`);
+  console.log(
+    `  loader public/widget.js:     ${kb(loader.rawBytes)} raw, ${kb(loader.gzipBytes)} gzip (target ≤ ${kb(TARGET.loaderGzipBytes)}) — ${mark(met.loader)}`,
+  );
+  console.log(
+    `  embed page JavaScript:       ${kb(embedJs.gzipBytes)} gzip, ${kb(embedJs.rawBytes)} raw, ${embedJs.files} files (target ≤ ${kb(TARGET.embedJsGzipBytes)}) — ${mark(met.embedJs)}`,
+  );
   for (const s of scripts.slice(0, 5)) console.log(`      ${kb(s.gzipBytes).padStart(9)} gzip  ${kb(s.rawBytes).padStart(9)} raw  ${s.url}`);
-  console.log(`  LCP, slow 4G + ${CPU_SLOWDOWN}× CPU:      median ${figures.lcpMedianMs} ms, max ${figures.lcpMaxMs} ms over ${LCP_RUNS} runs (target ≤ ${TARGET.lcpMedianMs} ms) — ${mark(met.lcp)}`);
+  console.log(
+    `  LCP, slow 4G + ${CPU_SLOWDOWN}× CPU:      median ${figures.lcpMedianMs} ms, max ${figures.lcpMaxMs} ms over ${LCP_RUNS} runs (target ≤ ${TARGET.lcpMedianMs} ms) — ${mark(met.lcp)}`,
+  );
   console.log(`      runs ${figures.lcpRunsMs.join(', ')} ms; FCP median ${figures.fcpMedianMs} ms; LCP element ${lcp.element}`);
-  console.log(`  estimate endpoint, ${CONNECTIONS} clients: ${figures.estimate.requestsPerS} req/s, p50 ${figures.estimate.p50Ms} ms, p95 ${figures.estimate.p95Ms} ms, p99 ${figures.estimate.p99Ms} ms, non-200 ${figures.estimate.non200} (target p95 ≤ ${TARGET.estimateP95Ms} ms) — ${mark(met.estimateP95)}`);
-  console.log(`      one client: ${figures.estimateOneClient.requestsPerS} req/s, p50 ${figures.estimateOneClient.p50Ms} ms, p95 ${figures.estimateOneClient.p95Ms} ms; server CPU ${figures.estimate.serverCpuCores} cores under load`);
-  console.log(`  bare node:http + core, ${CONNECTIONS} clients: ${figures.bare.requestsPerS} req/s, p50 ${figures.bare.p50Ms} ms, p95 ${figures.bare.p95Ms} ms, p99 ${figures.bare.p99Ms} ms`);
-  console.log(`      one client: ${figures.bareOneClient.requestsPerS} req/s, p50 ${figures.bareOneClient.p50Ms} ms; server CPU ${figures.bare.serverCpuCores} cores under load`);
-  console.log(`  app / bare: throughput ${figures.ratioRequestsPerS}×, p95 ${figures.ratioP95}×  (${figures.cpus} CPUs shared by load generator, server and PostgreSQL)`);
-  if (!loadValid) console.log(`  INVALID load run: non-200 answers or errors — first: ${appLoad.firstFailure ?? appSerial.firstFailure ?? bareLoad.firstFailure}`);
+  console.log(
+    `  estimate endpoint, ${CONNECTIONS} clients: ${figures.estimate.requestsPerS} req/s, p50 ${figures.estimate.p50Ms} ms, p95 ${figures.estimate.p95Ms} ms, p99 ${figures.estimate.p99Ms} ms, non-200 ${figures.estimate.non200} (target p95 ≤ ${TARGET.estimateP95Ms} ms) — ${mark(met.estimateP95)}`,
+  );
+  console.log(
+    `      one client: ${figures.estimateOneClient.requestsPerS} req/s, p50 ${figures.estimateOneClient.p50Ms} ms, p95 ${figures.estimateOneClient.p95Ms} ms; server CPU ${figures.estimate.serverCpuCores} cores under load`,
+  );
+  console.log(
+    `  bare node:http + core, ${CONNECTIONS} clients: ${figures.bare.requestsPerS} req/s, p50 ${figures.bare.p50Ms} ms, p95 ${figures.bare.p95Ms} ms, p99 ${figures.bare.p99Ms} ms`,
+  );
+  console.log(
+    `      one client: ${figures.bareOneClient.requestsPerS} req/s, p50 ${figures.bareOneClient.p50Ms} ms; server CPU ${figures.bare.serverCpuCores} cores under load`,
+  );
+  console.log(
+    `  app / bare: throughput ${figures.ratioRequestsPerS}×, p95 ${figures.ratioP95}×  (${figures.cpus} CPUs shared by load generator, server and PostgreSQL)`,
+  );
+  if (!loadValid)
+    console.log(`  INVALID load run: non-200 answers or errors — first: ${appLoad.firstFailure ?? appSerial.firstFailure ?? bareLoad.firstFailure}`);
   console.log(`  all targets — ${passed ? 'met' : 'NOT met'}`);
 
   const out = join(root, 'bench', 'results', 'widget.json');

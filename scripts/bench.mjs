@@ -15,7 +15,9 @@ const benchDir = path.join(root, 'bench');
 const resultsDir = path.join(benchDir, 'results');
 mkdirSync(resultsDir, { recursive: true });
 const only = process.argv[2];
-const files = readdirSync(benchDir).filter((f) => f.endsWith('.bench.ts') && (!only || f.includes(only))).sort();
+const files = readdirSync(benchDir)
+  .filter((f) => f.endsWith('.bench.ts') && (!only || f.includes(only)))
+  .sort();
 
 const { env, cleanUp } = await openThrowawayEnvironment({ database: 'lapwing_bench' });
 let failedToRun = false;
@@ -34,6 +36,8 @@ for (const file of files) {
   const json = path.join(resultsDir, file.replace(/\.bench\.ts$/, '.json'));
   if (!existsSync(json)) continue;
   const { name, figures, target, passed } = JSON.parse(readFileSync(json, 'utf8'));
-  console.log(`  ${passed ? 'meets target' : 'MISSES target'}  ${name}: ${JSON.stringify(figures)}  (target: ${typeof target === "string" ? target : JSON.stringify(target)})`);
+  console.log(
+    `  ${passed ? 'meets target' : 'MISSES target'}  ${name}: ${JSON.stringify(figures)}  (target: ${typeof target === 'string' ? target : JSON.stringify(target)})`,
+  );
 }
 process.exit(failedToRun ? 1 : 0);

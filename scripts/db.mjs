@@ -20,8 +20,13 @@ const cluster = initCluster({ binDir, dir: devClusterDir(), port: ports.pg });
 const wasRunning = clusterIsRunning(cluster);
 if (!wasRunning) startCluster(cluster);
 const env = appEnv({
-  cluster, database: 'lapwing', s3Port: ports.s3, smtpPort: ports.smtp, appPort: ports.app,
-  appSecret: devAppSecret(), mailDir: path.join(dataDir, 'mail'),
+  cluster,
+  database: 'lapwing',
+  s3Port: ports.s3,
+  smtpPort: ports.smtp,
+  appPort: ports.app,
+  appSecret: devAppSecret(),
+  mailDir: path.join(dataDir, 'mail'),
 });
 
 // Seeding stores demo photos, so it needs the S3 stand-in; start the stand-ins unless `npm start` runs them.

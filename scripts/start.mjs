@@ -19,7 +19,12 @@ const binDir = ensurePostgres();
 const pgDir = devClusterDir();
 mkdirSync(dataDir, { recursive: true });
 
-for (const [name, port] of [['app', appPort], ['PostgreSQL', pgPort], ['S3 stand-in', s3Port], ['SMTP stand-in', smtpPort]]) {
+for (const [name, port] of [
+  ['app', appPort],
+  ['PostgreSQL', pgPort],
+  ['S3 stand-in', s3Port],
+  ['SMTP stand-in', smtpPort],
+]) {
   if (await portInUse(port)) fail(`Port ${port} (${name}) is taken. Stop what uses it, or set PORT / LAPWING_PG_PORT / LAPWING_S3_PORT / LAPWING_SMTP_PORT.`);
 }
 

@@ -20,7 +20,11 @@ if (runE2e) ensureChromium();
 
 let failed = false;
 const started = Date.now();
-const throwaway = await openThrowawayEnvironment({ onStandInsExit: () => { failed = true; } });
+const throwaway = await openThrowawayEnvironment({
+  onStandInsExit: () => {
+    failed = true;
+  },
+});
 const { cleanUp } = throwaway;
 // Server logs below warnings would drown the test report; a test may still ask for more.
 const env = { LOG_LEVEL: 'warn', ...throwaway.env };

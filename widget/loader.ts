@@ -78,11 +78,13 @@
       panel = document.createElement('div');
       panel.setAttribute('role', 'dialog');
       panel.setAttribute('aria-label', label);
-      panel.style.cssText = 'position:fixed;right:16px;bottom:76px;z-index:2147483001;width:min(440px,calc(100vw - 32px));height:min(760px,calc(100vh - 96px));background:#FAF7F2;border-radius:12px;box-shadow:0 4px 24px rgba(0,0,0,.3);overflow:hidden;display:flex;flex-direction:column;';
+      panel.style.cssText =
+        'position:fixed;right:16px;bottom:76px;z-index:2147483001;width:min(440px,calc(100vw - 32px));height:min(760px,calc(100vh - 96px));background:#FAF7F2;border-radius:12px;box-shadow:0 4px 24px rgba(0,0,0,.3);overflow:hidden;display:flex;flex-direction:column;';
       const shut = document.createElement('button');
       shut.type = 'button';
       shut.textContent = 'Close';
-      shut.style.cssText = 'align-self:flex-end;margin:6px;padding:6px 12px;border:1px solid #5B6B73;border-radius:6px;background:#fff;color:#1F2A2E;font:500 14px system-ui,sans-serif;cursor:pointer;';
+      shut.style.cssText =
+        'align-self:flex-end;margin:6px;padding:6px 12px;border:1px solid #5B6B73;border-radius:6px;background:#fff;color:#1F2A2E;font:500 14px system-ui,sans-serif;cursor:pointer;';
       shut.addEventListener('click', close);
       panel.addEventListener('keydown', (event) => {
         if (event.key === 'Escape') close();

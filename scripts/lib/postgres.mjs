@@ -50,8 +50,16 @@ export function initCluster({ binDir, dir, port }) {
     }
     mustSucceed(
       pgCommand(binDir, 'initdb', [
-        '-D', dataDir, '-U', DB_USER, `--pwfile=${passwordFile}`,
-        '--auth-local=scram-sha-256', '--auth-host=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8',
+        '-D',
+        dataDir,
+        '-U',
+        DB_USER,
+        `--pwfile=${passwordFile}`,
+        '--auth-local=scram-sha-256',
+        '--auth-host=scram-sha-256',
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
       ]),
       'initdb',
     );
@@ -71,10 +79,7 @@ export function startCluster(cluster) {
     mustSucceed(pgCommand(binDir, 'pg_ctl', ['-D', dataDir, '-w', '-m', 'fast', 'stop']), 'pg_ctl stop');
   }
   const options = `-p ${port} -c listen_addresses=127.0.0.1 -c unix_socket_directories=''`;
-  mustSucceed(
-    pgCommand(binDir, 'pg_ctl', ['-D', dataDir, '-l', path.join(dataDir, 'server.log'), '-w', '-t', '60', '-o', options, 'start']),
-    'pg_ctl start',
-  );
+  mustSucceed(pgCommand(binDir, 'pg_ctl', ['-D', dataDir, '-l', path.join(dataDir, 'server.log'), '-w', '-t', '60', '-o', options, 'start']), 'pg_ctl start');
 }
 
 export function stopCluster(cluster) {
@@ -89,7 +94,11 @@ export function databaseUrl(cluster, database) {
 export function ensureDatabase(cluster, database) {
   const env = { ...process.env, PGPASSWORD: cluster.password };
   const connect = ['-h', '127.0.0.1', '-p', String(cluster.port), '-U', cluster.user];
-  const exists = spawnSync(path.join(cluster.binDir, 'psql'), [...connect, '-d', 'postgres', '-tAc', `select 1 from pg_database where datname = '${database}'`], { env, encoding: 'utf8' });
+  const exists = spawnSync(
+    path.join(cluster.binDir, 'psql'),
+    [...connect, '-d', 'postgres', '-tAc', `select 1 from pg_database where datname = '${database}'`],
+    { env, encoding: 'utf8' },
+  );
   mustSucceed(exists, 'psql');
   if (exists.stdout.trim() === '1') return;
   mustSucceed(spawnSync(path.join(cluster.binDir, 'createdb'), [...connect, database], { env, encoding: 'utf8' }), 'createdb');

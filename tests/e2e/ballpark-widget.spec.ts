@@ -31,7 +31,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   // Room 1 by room size; room 2 wall by wall.
   await widget.getByLabel('Which room?').first().fill('Dining room');
   await widget.getByRole('textbox', { name: 'Room length' }).fill("13'");
-  await widget.getByRole('textbox', { name: 'Room width' }).fill("11' 6\"");
+  await widget.getByRole('textbox', { name: 'Room width' }).fill('11\' 6"');
   await widget.getByRole('button', { name: 'Add another room' }).click();
   const room2 = widget.getByRole('group', { name: 'Room 2' });
   await room2.getByLabel('Which room?').fill('Hallway');
@@ -108,7 +108,9 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   expect(steps.map((s) => s.step)).toEqual(['widget-opened', 'first-estimate', 'lead-sent']);
 
   // The stored photos carry no location or other metadata, and the sideways one is upright.
-  const photoRows = await query<{ image_key: string; width: number; height: number }>(`select image_key, width, height from lead_photo where lead_id = $1`, [lead!.id]);
+  const photoRows = await query<{ image_key: string; width: number; height: number }>(`select image_key, width, height from lead_photo where lead_id = $1`, [
+    lead!.id,
+  ]);
   for (const row of photoRows) {
     const object = await s3.send(new GetObjectCommand({ Bucket: process.env.S3_BUCKET, Key: row.image_key }));
     const bytes = Buffer.from(await object.Body!.transformToByteArray());

@@ -13,12 +13,15 @@ type Answer = { status: number; location?: string; body: string };
 function raw(path: string, { method = 'GET', headers = {}, body }: { method?: string; headers?: Record<string, string>; body?: string } = {}): Promise<Answer> {
   const { hostname, port } = new URL(BASE_URL);
   return new Promise((resolve, reject) => {
-    const request = http.request({ hostname, port, path, method, headers: { ...headers, ...(body ? { 'Content-Length': Buffer.byteLength(body) } : {}) } }, (response) => {
-      let text = '';
-      response.setEncoding('utf8');
-      response.on('data', (chunk) => (text += chunk));
-      response.on('end', () => resolve({ status: response.statusCode ?? 0, location: response.headers.location, body: text }));
-    });
+    const request = http.request(
+      { hostname, port, path, method, headers: { ...headers, ...(body ? { 'Content-Length': Buffer.byteLength(body) } : {}) } },
+      (response) => {
+        let text = '';
+        response.setEncoding('utf8');
+        response.on('data', (chunk) => (text += chunk));
+        response.on('end', () => resolve({ status: response.statusCode ?? 0, location: response.headers.location, body: text }));
+      },
+    );
     request.on('error', reject);
     request.end(body);
   });

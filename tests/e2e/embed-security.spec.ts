@@ -14,7 +14,9 @@ test('a page of another origin cannot frame the widget; the firm’s own demo pa
   // stop its frame before the widget's own policy is ever consulted.)
   const port = await freeLoopbackPort();
   const otherSite = createServer((_request, response) => {
-    response.writeHead(200, { 'content-type': 'text/html' }).end(`<!doctype html><h1>Other site</h1><iframe id="w" src="${baseURL}/embed/cedar-hollow"></iframe>`);
+    response
+      .writeHead(200, { 'content-type': 'text/html' })
+      .end(`<!doctype html><h1>Other site</h1><iframe id="w" src="${baseURL}/embed/cedar-hollow"></iframe>`);
   });
   await new Promise<void>((resolve) => otherSite.listen(port, '127.0.0.1', resolve));
   try {
@@ -48,7 +50,10 @@ test('another origin cannot call the public API, and gets no CORS permission', a
   const foreign = await request.post('/api/embed/cedar-hollow/estimate', { headers: { Origin: FOREIGN }, data: { formToken, project: twoRoomProject } });
   expect(foreign.status()).toBe(403);
   expect(foreign.headers()['access-control-allow-origin']).toBeUndefined();
-  const preflight = await request.fetch('/api/embed/cedar-hollow/leads', { method: 'OPTIONS', headers: { Origin: FOREIGN, 'Access-Control-Request-Method': 'POST' } });
+  const preflight = await request.fetch('/api/embed/cedar-hollow/leads', {
+    method: 'OPTIONS',
+    headers: { Origin: FOREIGN, 'Access-Control-Request-Method': 'POST' },
+  });
   expect(preflight.status()).toBe(403);
   expect(preflight.headers()['access-control-allow-origin']).toBeUndefined();
 
@@ -64,9 +69,24 @@ test('another origin cannot call the public API, and gets no CORS permission', a
 test('bad input gets a JSON 4xx with field messages, never a 500', async ({ request, baseURL }) => {
   const formToken = await formTokenFor(request, 'cedar-hollow');
   const cases: { data?: unknown; body?: string; headers?: Record<string, string>; status: number; field?: string }[] = [
-    { data: { formToken, project: { ...twoRoomProject, rooms: [{ ...twoRoomProject.rooms[1], ceilingHeight: -5 }] } }, status: 400, field: 'project.rooms.0.ceilingHeight' },
-    { data: { formToken, project: { ...twoRoomProject, rooms: [{ ...twoRoomProject.rooms[1], walls: [{ length: 40, openings: [{ kind: 'door', width: 60 }] }] }] } }, status: 400, field: 'project.rooms.0.walls.0.openings.0' },
-    { data: { formToken, project: { ...twoRoomProject, rooms: [{ ...twoRoomProject.rooms[1], treatment: { id: 'marble', height: 'full' } }] } }, status: 400, field: 'project.rooms.0.treatment' },
+    {
+      data: { formToken, project: { ...twoRoomProject, rooms: [{ ...twoRoomProject.rooms[1], ceilingHeight: -5 }] } },
+      status: 400,
+      field: 'project.rooms.0.ceilingHeight',
+    },
+    {
+      data: {
+        formToken,
+        project: { ...twoRoomProject, rooms: [{ ...twoRoomProject.rooms[1], walls: [{ length: 40, openings: [{ kind: 'door', width: 60 }] }] }] },
+      },
+      status: 400,
+      field: 'project.rooms.0.walls.0.openings.0',
+    },
+    {
+      data: { formToken, project: { ...twoRoomProject, rooms: [{ ...twoRoomProject.rooms[1], treatment: { id: 'marble', height: 'full' } }] } },
+      status: 400,
+      field: 'project.rooms.0.treatment',
+    },
     { data: { formToken, project: twoRoomProject, isAdmin: true }, status: 400, field: 'isAdmin' },
     { data: { formToken: 'forged.token', project: twoRoomProject }, status: 400, field: 'formToken' },
     { body: 'not json', headers: { 'Content-Type': 'application/json' }, status: 400 },
@@ -78,7 +98,11 @@ test('bad input gets a JSON 4xx with field messages, never a 500', async ({ requ
     expect(response.status(), JSON.stringify(c.data ?? c.body).slice(0, 120)).toBe(c.status);
     const body = await response.json();
     expect(typeof body.error).toBe('string');
-    if (c.field) expect(Object.keys(body.fields).some((key: string) => key.startsWith(c.field!)), JSON.stringify(body.fields)).toBe(true);
+    if (c.field)
+      expect(
+        Object.keys(body.fields).some((key: string) => key.startsWith(c.field!)),
+        JSON.stringify(body.fields),
+      ).toBe(true);
   }
   const unknown = await request.post('/api/embed/no-such-firm/estimate', { data: {} });
   expect(unknown.status()).toBe(404);
@@ -117,7 +141,15 @@ test('the same idempotency key sent twice over HTTP makes one lead', async ({ re
     formToken,
     idempotencyKey,
     project: twoRoomProject,
-    contact: { name: 'Lou Brandt', email: 'lou@example.test', phone: '512-555-0190', address: '9 Millrace Lane', postcode: '78745', preferredContact: 'phone', consent: true },
+    contact: {
+      name: 'Lou Brandt',
+      email: 'lou@example.test',
+      phone: '512-555-0190',
+      address: '9 Millrace Lane',
+      postcode: '78745',
+      preferredContact: 'phone',
+      consent: true,
+    },
   };
   const [first, second] = await Promise.all([request.post('/api/embed/cedar-hollow/leads', { data }), request.post('/api/embed/cedar-hollow/leads', { data })]);
   expect(first.status()).toBe(201);

@@ -132,7 +132,10 @@ test('the other firm sees only its own people and cannot switch into the first f
 });
 
 function routeOf(file: string, root: string, prefix: string): string {
-  const relative = path.relative(root, file).replace(/\.(astro|ts)$/, '').replace(/(^|\/)index$/, '');
+  const relative = path
+    .relative(root, file)
+    .replace(/\.(astro|ts)$/, '')
+    .replace(/(^|\/)index$/, '');
   return relative ? `${prefix}/${relative}` : prefix;
 }
 

@@ -12,7 +12,15 @@ import { query } from '../helpers/app-database';
  * 'unsafe-inline', object-src 'none', base-uri); OWASP REST Security Cheat Sheet (APIs: no-store,
  * frame-ancestors 'none'); OWASP Session Management Cheat Sheet (no-store on pages with secrets).
  */
-const NAMES = ['content-security-policy', 'strict-transport-security', 'x-content-type-options', 'x-frame-options', 'referrer-policy', 'permissions-policy', 'cache-control'];
+const NAMES = [
+  'content-security-policy',
+  'strict-transport-security',
+  'x-content-type-options',
+  'x-frame-options',
+  'referrer-policy',
+  'permissions-policy',
+  'cache-control',
+];
 
 /** The policy as sorted directives, each build's script and style hashes shown as one placeholder. */
 function directives(policy: string): string[] {
@@ -115,7 +123,9 @@ test('each kind of answer carries its security headers (http)', async () => {
     // The widget's page may be framed by the firm's own sites, so it has no X-Frame-Options.
     widgetPage: {
       ...PAGE,
-      'content-security-policy': PAGE_POLICY.map((directive) => (directive.startsWith('frame-ancestors') ? widgetPolicy.find((d) => d.startsWith('frame-ancestors'))! : directive)),
+      'content-security-policy': PAGE_POLICY.map((directive) =>
+        directive.startsWith('frame-ancestors') ? widgetPolicy.find((d) => d.startsWith('frame-ancestors'))! : directive,
+      ),
       'x-frame-options': undefined,
       ...noStore,
     },
@@ -152,7 +162,10 @@ test.describe('served over https', () => {
     // A second instance of the same build whose public origin is https (TLS itself ends at a proxy).
     const port = await freePort();
     origin = `http://127.0.0.1:${port}`;
-    server = spawn(process.execPath, ['scripts/serve.mjs'], { env: { ...process.env, PORT: String(port), PUBLIC_ORIGIN: 'https://lapwing.test' }, stdio: ['ignore', 'pipe', 'inherit'] });
+    server = spawn(process.execPath, ['scripts/serve.mjs'], {
+      env: { ...process.env, PORT: String(port), PUBLIC_ORIGIN: 'https://lapwing.test' },
+      stdio: ['ignore', 'pipe', 'inherit'],
+    });
     await new Promise<void>((resolve, reject) => {
       server!.once('exit', (code) => reject(new Error(`the https-origin server stopped (code ${code})`)));
       server!.stdout!.on('data', (chunk: Buffer) => {
@@ -186,7 +199,9 @@ async function watchPolicy(page: Page): Promise<string[]> {
   await page.exposeFunction('reportRefusal', (text: string) => refused.push(text));
   await page.addInitScript(() => {
     document.addEventListener('securitypolicyviolation', (event) => {
-      (window as unknown as { reportRefusal: (text: string) => void }).reportRefusal(`${location.pathname}: ${event.violatedDirective} ${event.blockedURI} ${event.sample}`);
+      (window as unknown as { reportRefusal: (text: string) => void }).reportRefusal(
+        `${location.pathname}: ${event.violatedDirective} ${event.blockedURI} ${event.sample}`,
+      );
     });
   });
   page.on('console', (message) => {

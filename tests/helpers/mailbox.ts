@@ -39,7 +39,9 @@ export async function mailTo(address: string): Promise<ReceivedMail[]> {
 export async function waitForMail({ to, subject, timeoutMs = 10_000 }: { to: string; subject?: string | RegExp; timeoutMs?: number }): Promise<ReceivedMail> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
-    const found = (await mailTo(to)).find((m) => subject === undefined || (typeof subject === 'string' ? m.subject.includes(subject) : subject.test(m.subject)));
+    const found = (await mailTo(to)).find(
+      (m) => subject === undefined || (typeof subject === 'string' ? m.subject.includes(subject) : subject.test(m.subject)),
+    );
     if (found) return found;
     if (Date.now() > deadline) throw new Error(`No e-mail to ${to}${subject ? ` with subject ${subject}` : ''} within ${timeoutMs} ms`);
     await new Promise((resolve) => setTimeout(resolve, 100));

@@ -12,7 +12,11 @@ import type { SendMail } from '../../src/lib/server/mail/transport';
 type Options = { send?: SendMail };
 
 /** One delivery pass over the due rows that match `only`. */
-export function deliverMatchingMail(em: EntityManager, only: FilterQuery<OutboxMail>, { send }: Options = {}): Promise<{ sent: number; failed: number; claimed: number }> {
+export function deliverMatchingMail(
+  em: EntityManager,
+  only: FilterQuery<OutboxMail>,
+  { send }: Options = {},
+): Promise<{ sent: number; failed: number; claimed: number }> {
   return deliverDueMail(em, { only, send, limit: 500 });
 }
 

@@ -11,7 +11,9 @@ import sharp from 'sharp';
  * right-hand side, the 0th column is the visual top", i.e. shown turned 90° clockwise.
  */
 export async function sidewaysPhoneJpeg({ width = 3000, height = 2000 } = {}): Promise<Buffer> {
-  const bottom = await sharp({ create: { width, height: height / 2, channels: 3, background: '#0000ff' } }).png().toBuffer();
+  const bottom = await sharp({ create: { width, height: height / 2, channels: 3, background: '#0000ff' } })
+    .png()
+    .toBuffer();
   const stored = await sharp({ create: { width, height, channels: 3, background: '#ff0000' } })
     .composite([{ input: bottom, top: height / 2, left: 0 }])
     .jpeg()
@@ -57,12 +59,16 @@ export function smallPng({ transparent = false } = {}): Promise<Buffer> {
 }
 
 export function smallWebp(): Promise<Buffer> {
-  return sharp({ create: { width: 800, height: 600, channels: 3, background: '#e9d8b4' } }).webp().toBuffer();
+  return sharp({ create: { width: 800, height: 600, channels: 3, background: '#e9d8b4' } })
+    .webp()
+    .toBuffer();
 }
 
 /** 8000 × 6000 = 48 megapixels of one colour: a PNG of a few hundred kilobytes. */
 export function hugePixelPng(): Promise<Buffer> {
-  return sharp({ create: { width: 8000, height: 6000, channels: 3, background: '#ffffff' } }).png({ compressionLevel: 9 }).toBuffer();
+  return sharp({ create: { width: 8000, height: 6000, channels: 3, background: '#ffffff' } })
+    .png({ compressionLevel: 9 })
+    .toBuffer();
 }
 
 /** A JPEG cut off halfway through its image data. */

@@ -34,23 +34,20 @@ export async function startStorageProxy(target: string, bucket: string): Promise
     const forward = async () => {
       try {
         await proxy.before?.(request);
-        const forwarded = http.request(
-          { host: upstream.hostname, port: upstream.port, method: req.method, path: req.url, headers: req.headers },
-          (answer) => {
-            const body: Buffer[] = [];
-            answer.on('data', (chunk: Buffer) => body.push(chunk));
-            const finish = async () => {
-              try {
-                await proxy.after?.(request, answer.statusCode ?? 0);
-              } catch (error) {
-                console.error('storage proxy hook failed:', error);
-              }
-              res.writeHead(answer.statusCode ?? 502, answer.headers);
-              res.end(Buffer.concat(body));
-            };
-            answer.on('end', () => void finish());
-          },
-        );
+        const forwarded = http.request({ host: upstream.hostname, port: upstream.port, method: req.method, path: req.url, headers: req.headers }, (answer) => {
+          const body: Buffer[] = [];
+          answer.on('data', (chunk: Buffer) => body.push(chunk));
+          const finish = async () => {
+            try {
+              await proxy.after?.(request, answer.statusCode ?? 0);
+            } catch (error) {
+              console.error('storage proxy hook failed:', error);
+            }
+            res.writeHead(answer.statusCode ?? 502, answer.headers);
+            res.end(Buffer.concat(body));
+          };
+          answer.on('end', () => void finish());
+        });
         forwarded.on('error', () => res.writeHead(502).end());
         forwarded.end(Buffer.concat(chunks));
       } catch (error) {

@@ -32,7 +32,17 @@ afterAll(async () => {
 type Stored = { id: string; keys: string[] };
 
 /** A photo row of `ageHours`, with the stored objects its status implies (all really written). */
-async function photo({ ageHours, status, sent = false, uploadLeftOver = false }: { ageHours: number; status: PhotoStatus; sent?: boolean; uploadLeftOver?: boolean }): Promise<Stored> {
+async function photo({
+  ageHours,
+  status,
+  sent = false,
+  uploadLeftOver = false,
+}: {
+  ageHours: number;
+  status: PhotoStatus;
+  sent?: boolean;
+  uploadLeftOver?: boolean;
+}): Promise<Stored> {
   const em = orm.em.fork();
   const id = randomUUID();
   const draftId = randomUUID();

@@ -93,9 +93,21 @@ describe('sessions', () => {
     const here = await startSession(lea.user.id, company.id);
     const elsewhere = await startSession(lea.user.id, company.id);
     await expect(
-      changePassword(em(), { userId: lea.user.id, currentPassword: 'wrong password here', newPassword: 'a brand new password', keepSessionToken: here.token, address: anAddress() }),
+      changePassword(em(), {
+        userId: lea.user.id,
+        currentPassword: 'wrong password here',
+        newPassword: 'a brand new password',
+        keepSessionToken: here.token,
+        address: anAddress(),
+      }),
     ).rejects.toMatchObject({ fields: { currentPassword: 'That is not your current password.' } });
-    const result = await changePassword(em(), { userId: lea.user.id, currentPassword: lea.password, newPassword: 'a brand new password', keepSessionToken: here.token, address: anAddress() });
+    const result = await changePassword(em(), {
+      userId: lea.user.id,
+      currentPassword: lea.password,
+      newPassword: 'a brand new password',
+      keepSessionToken: here.token,
+      address: anAddress(),
+    });
     expect(result.endedSessions).toBe(1);
     expect((await getLucia().validateSession(here.token)).session).not.toBeNull();
     expect((await getLucia().validateSession(elsewhere.token)).session).toBeNull();
@@ -106,7 +118,10 @@ describe('sign-in', () => {
   test('a right password signs in to the firm; a wrong one and an unknown address get the same answer', async () => {
     const { members, company } = await buildFirm(em(), [{ name: 'Mo', role: 'owner' }]);
     const address = anAddress();
-    expect(await checkSignIn(em(), { email: members[0].email, password: members[0].password, address })).toEqual({ userId: members[0].user.id, companyId: company.id });
+    expect(await checkSignIn(em(), { email: members[0].email, password: members[0].password, address })).toEqual({
+      userId: members[0].user.id,
+      companyId: company.id,
+    });
     const wrong = await checkSignIn(em(), { email: members[0].email, password: 'not the password', address }).catch((e) => e);
     const unknown = await checkSignIn(em(), { email: 'nobody-here@firm.test', password: 'not the password', address }).catch((e) => e);
     expect(wrong).toBeInstanceOf(InvalidInput);
@@ -147,7 +162,9 @@ describe('sign-in', () => {
     expect(refused).toBeInstanceOf(TooManyRequests);
     expect(refused.message).toMatch(/from your network/);
     // The same person from another address still gets in: the address limit cannot lock them out.
-    expect(await checkSignIn(em(), { email: members[0].email, password: members[0].password, address: anAddress() })).toMatchObject({ userId: members[0].user.id });
+    expect(await checkSignIn(em(), { email: members[0].email, password: members[0].password, address: anAddress() })).toMatchObject({
+      userId: members[0].user.id,
+    });
   }, 60_000);
 });
 
@@ -196,24 +213,34 @@ describe('team', () => {
     await deliverMailTo(em(), rae.email);
     const token = linkToken((await waitForMail({ to: rae.email, subject: second.company.name })).text, 'invite');
     expect(await readInvite(em(), token)).toMatchObject({ state: 'open', hasAccount: true });
-    await expect(acceptInvite(em(), token, { password: 'not her password' })).rejects.toMatchObject({ fields: { password: 'That is not your Lapwing password.' } });
+    await expect(acceptInvite(em(), token, { password: 'not her password' })).rejects.toMatchObject({
+      fields: { password: 'That is not your Lapwing password.' },
+    });
     // The failed attempt did not spend the link.
     expect(await acceptInvite(em(), token, { password: rae.password })).toEqual({ userId: rae.user.id, companyId: second.company.id });
     expect(await em().count(Membership, { user: rae.user.id })).toBe(2);
   });
 
   test('inviting someone already on the team is refused next to the e-mail field', async () => {
-    const { members, company } = await buildFirm(em(), [{ name: 'Tam', role: 'owner' }, { name: 'Uma', role: 'sales' }]);
+    const { members, company } = await buildFirm(em(), [
+      { name: 'Tam', role: 'owner' },
+      { name: 'Uma', role: 'sales' },
+    ]);
     await expect(inviteToTeam(em(), { companyId: company.id, invitedById: members[0].user.id, email: members[1].email, role: 'sales' })).rejects.toMatchObject({
       fields: { email: 'Already on the team.' },
     });
   });
 
   test('the last owner can be neither removed nor demoted; a changed role ends that person’s sessions', async () => {
-    const { members, company } = await buildFirm(em(), [{ name: 'Vic', role: 'owner' }, { name: 'Wes', role: 'sales' }]);
+    const { members, company } = await buildFirm(em(), [
+      { name: 'Vic', role: 'owner' },
+      { name: 'Wes', role: 'sales' },
+    ]);
     const [vic, wes] = members;
     await expect(removeMember(em(), { companyId: company.id, membershipId: vic.membership.id })).rejects.toBeInstanceOf(Conflict);
-    await expect(changeRole(em(), { companyId: company.id, membershipId: vic.membership.id, role: 'sales', actingSessionToken: null })).rejects.toBeInstanceOf(Conflict);
+    await expect(changeRole(em(), { companyId: company.id, membershipId: vic.membership.id, role: 'sales', actingSessionToken: null })).rejects.toBeInstanceOf(
+      Conflict,
+    );
 
     const wesSession = await startSession(wes.user.id, company.id);
     await changeRole(em(), { companyId: company.id, membershipId: wes.membership.id, role: 'owner', actingSessionToken: null });
@@ -227,10 +254,15 @@ describe('team', () => {
 
   test('another firm’s members and invitations are not found, and nothing changes', async () => {
     const mine = await buildFirm(em(), [{ name: 'Xan', role: 'owner' }]);
-    const theirs = await buildFirm(em(), [{ name: 'Yul', role: 'owner' }, { name: 'Zed', role: 'sales' }]);
+    const theirs = await buildFirm(em(), [
+      { name: 'Yul', role: 'owner' },
+      { name: 'Zed', role: 'sales' },
+    ]);
     const before = await listTeam(em(), theirs.company.id);
     const target = theirs.members[1].membership.id;
-    await expect(changeRole(em(), { companyId: mine.company.id, membershipId: target, role: 'owner', actingSessionToken: null })).rejects.toBeInstanceOf(NotFound);
+    await expect(changeRole(em(), { companyId: mine.company.id, membershipId: target, role: 'owner', actingSessionToken: null })).rejects.toBeInstanceOf(
+      NotFound,
+    );
     await expect(removeMember(em(), { companyId: mine.company.id, membershipId: target })).rejects.toBeInstanceOf(NotFound);
     expect(await listTeam(em(), theirs.company.id)).toEqual(before);
     expect((await listTeam(em(), mine.company.id)).members.map((m) => m.name)).toEqual(['Xan']);

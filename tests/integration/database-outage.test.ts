@@ -46,7 +46,9 @@ async function eventually(server: AppServer, ask: () => Promise<Response>, check
     }
     await new Promise((resolve) => setTimeout(resolve, 200));
   }
-  throw new Error(`Gave up waiting; last answer: ${last instanceof Response ? last.status : last}; the app ${server.alive() ? 'runs' : 'has exited'}, its output:\n${server.output()}`);
+  throw new Error(
+    `Gave up waiting; last answer: ${last instanceof Response ? last.status : last}; the app ${server.alive() ? 'runs' : 'has exited'}, its output:\n${server.output()}`,
+  );
 }
 
 const postEstimate = (app: AppServer, slug: string) =>
@@ -84,7 +86,11 @@ describe('a database restart', () => {
     expect((await postEstimate(app, 'cedar-hollow')).status).toBe(400);
 
     expect(await terminateOtherConnections(cluster.url)).toBeGreaterThan(0);
-    await eventually(app, () => health(app), (response) => response.status === 200);
+    await eventually(
+      app,
+      () => health(app),
+      (response) => response.status === 200,
+    );
     expect((await postEstimate(app, 'cedar-hollow')).status).toBe(400);
     expect(app.alive(), app.output()).toBe(true);
 
@@ -110,7 +116,11 @@ describe('a database restart', () => {
 
     cluster.start();
     for (const server of [app, startedDuringOutage]) {
-      await eventually(server, () => health(server), (response) => response.status === 200);
+      await eventually(
+        server,
+        () => health(server),
+        (response) => response.status === 200,
+      );
       expect((await postEstimate(server, 'cedar-hollow')).status).toBe(400);
       expect((await fetch(`${server.origin}/embed/northgate`)).status).toBe(200);
       expect(server.alive(), server.output()).toBe(true);

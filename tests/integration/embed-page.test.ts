@@ -26,8 +26,19 @@ describe('the embed page', () => {
     em.create(Company, { slug: 'rates-unreadable', name: 'Birch Row Interiors' });
     await em.flush();
     // The page adds its frame-ancestors to Astro's own policy, so the container needs that policy on, as the app has it.
-    const csp = { cspDestination: 'header', algorithm: 'SHA-256', scriptHashes: [], scriptResources: [], isStrictDynamic: false, styleHashes: [], styleResources: [], directives: [] };
-    container = await AstroContainer.create({ manifest: { csp } as unknown as Parameters<typeof AstroContainer.create>[0] extends infer O ? O extends { manifest?: infer M } ? M : never : never });
+    const csp = {
+      cspDestination: 'header',
+      algorithm: 'SHA-256',
+      scriptHashes: [],
+      scriptResources: [],
+      isStrictDynamic: false,
+      styleHashes: [],
+      styleResources: [],
+      directives: [],
+    };
+    container = await AstroContainer.create({
+      manifest: { csp } as unknown as Parameters<typeof AstroContainer.create>[0] extends infer O ? (O extends { manifest?: infer M } ? M : never) : never,
+    });
   });
 
   afterAll(async () => {

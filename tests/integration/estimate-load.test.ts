@@ -63,7 +63,15 @@ describe('a costly estimate request', () => {
         formToken: issueFormToken(cedar.id, Date.now() - 60_000).token,
         idempotencyKey: randomUUID(),
         project: schemaMaximumProject(),
-        contact: { name: 'Ada Greenleaf', email: 'ada@example.test', phone: '(512) 555-0161', address: '27 Tanager St', postcode: '78704', preferredContact: 'email', consent: true },
+        contact: {
+          name: 'Ada Greenleaf',
+          email: 'ada@example.test',
+          phone: '(512) 555-0161',
+          address: '27 Tanager St',
+          postcode: '78704',
+          preferredContact: 'email',
+          consent: true,
+        },
       },
       clientAddress: address(),
     });

@@ -104,7 +104,12 @@ describe('lengths and areas on the inquiry page are in the firm’s units', () =
     buildRateBookVersion(setup, company.id, { status: 'published', rates: { ...sampleRateBook(), units: 'metric', currency: 'EUR', locale: 'de-DE' } });
     await setup.flush();
     const fmt = await firmFormats(em(), company.id);
-    expect({ timeZone: fmt.timeZone, units: fmt.units, currency: fmt.currency, locale: fmt.locale }).toEqual({ timeZone: 'Europe/Berlin', units: 'metric', currency: 'EUR', locale: 'de-DE' });
+    expect({ timeZone: fmt.timeZone, units: fmt.units, currency: fmt.currency, locale: fmt.locale }).toEqual({
+      timeZone: 'Europe/Berlin',
+      units: 'metric',
+      currency: 'EUR',
+      locale: 'de-DE',
+    });
     // Source: NIST SP 811 Appendix B, 1 in = 25.4 mm exactly; 39.5 in = 1003.3 mm.
     expect(fmt.length(39.5)).toBe('1003 mm');
     // Source: CLDR de-DE currency pattern "#,##0.00 ¤" with "." grouping and "," decimals (from memory).

@@ -44,7 +44,16 @@ function submission(company: Company, overrides: Partial<LeadRequest['contact']>
     formToken: token,
     idempotencyKey: randomUUID(),
     project: {
-      rooms: [{ name: 'Dining room', ceilingHeight: 96, length: 156, width: 132, walls: [{ side: 'length' }, { side: 'width', openings: [{ kind: 'door' }] }], treatment: { id: 'beadboard', height: 'wainscot' } }],
+      rooms: [
+        {
+          name: 'Dining room',
+          ceilingHeight: 96,
+          length: 156,
+          width: 132,
+          walls: [{ side: 'length' }, { side: 'width', openings: [{ kind: 'door' }] }],
+          treatment: { id: 'beadboard', height: 'wainscot' },
+        },
+      ],
       builtBefore1978: 'no',
       measuredBy: 'homeowner-tape',
     },

@@ -13,7 +13,9 @@ import { JOBS_SCHEMA, startJobRunner } from '../../src/lib/server/jobs/runner';
 async function tableNames(orm: MikroORM): Promise<string[]> {
   const rows = await orm.em
     .getConnection()
-    .execute<{ table_name: string }[]>(`select table_name from information_schema.tables where table_schema = 'public' and table_name <> 'mikro_orm_migrations' order by table_name`);
+    .execute<{ table_name: string }[]>(
+      `select table_name from information_schema.tables where table_schema = 'public' and table_name <> 'mikro_orm_migrations' order by table_name`,
+    );
   return rows.map((row) => row.table_name);
 }
 
@@ -66,10 +68,9 @@ describe('migrations', () => {
     await orm.migrator.up();
     const runner = await startJobRunner({ orm, connectionString: url, jobs: backgroundJobs });
     await runner.stop();
-    const [installed] = await orm.em.getConnection().execute<{ n: number }[]>(
-      `select count(*)::int as n from information_schema.tables where table_schema = ?`,
-      [JOBS_SCHEMA],
-    );
+    const [installed] = await orm.em
+      .getConnection()
+      .execute<{ n: number }[]>(`select count(*)::int as n from information_schema.tables where table_schema = ?`, [JOBS_SCHEMA]);
     expect(installed!.n).toBeGreaterThan(0);
 
     expect((await orm.schema.getUpdateSchemaSQL({ wrap: false })).trim()).toBe('');
@@ -84,14 +85,18 @@ describe('migrations', () => {
     await orm.migrator.down({ to: 0 });
     await orm.migrator.up({ to: before });
     const em = orm.em.fork();
-    const [company] = await em.getConnection().execute<{ id: string }[]>(`insert into company (id, slug, name) values (gen_random_uuid(), 'old-firm', 'Old Firm') returning id`);
+    const [company] = await em
+      .getConnection()
+      .execute<{ id: string }[]>(`insert into company (id, slug, name) values (gen_random_uuid(), 'old-firm', 'Old Firm') returning id`);
     // A lead as the earlier schema stored it: bare JSON in inputs, estimate and the rate book.
     const modern = buildLead(orm.em.fork(), company!.id);
     const bare = estimateSnapshot.read(modern.estimate);
-    const [version] = await em.getConnection().execute<{ id: string }[]>(
-      `insert into rate_book_version (id, company_id, number, status, data) values (gen_random_uuid(), ?, 1, 'published', ?::jsonb) returning id`,
-      [company!.id, JSON.stringify(modern.rateBookVersion.data.data)],
-    );
+    const [version] = await em
+      .getConnection()
+      .execute<{ id: string }[]>(
+        `insert into rate_book_version (id, company_id, number, status, data) values (gen_random_uuid(), ?, 1, 'published', ?::jsonb) returning id`,
+        [company!.id, JSON.stringify(modern.rateBookVersion.data.data)],
+      );
     await em.getConnection().execute(
       `insert into lead (id, company_id, reference, stage, name, email, phone, address, postcode, preferred_contact, consent_at, inputs, estimate, rate_book_version_id, range_low_cents, range_high_cents, idempotency_key, view_token_hash)
        values (gen_random_uuid(), ?, 'OLD1-LEAD', 'called-back', 'Old Lead', 'old@example.test', '+15125550147', '1 Old Rd', '78704', 'email', now(), ?::jsonb, ?::jsonb, ?, 1, 2, 'old-key', repeat('0', 64))`,

@@ -29,7 +29,12 @@ function postInFull(origin: string, path: string, headers: Record<string, string
       settle();
     });
     socket.on('connect', () => {
-      const head = [`POST ${path} HTTP/1.1`, `Host: ${hostname}:${port}`, `Content-Length: ${size}`, ...Object.entries(headers).map(([name, value]) => `${name}: ${value}`)];
+      const head = [
+        `POST ${path} HTTP/1.1`,
+        `Host: ${hostname}:${port}`,
+        `Content-Length: ${size}`,
+        ...Object.entries(headers).map(([name, value]) => `${name}: ${value}`),
+      ];
       socket.write(`${head.join('\r\n')}\r\n\r\n`);
       const chunk = Buffer.alloc(64 * 1024, 'x');
       let sent = 0;

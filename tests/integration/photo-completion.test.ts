@@ -168,7 +168,11 @@ describe('only the object at the signed key is accepted', () => {
     proxy.after = async (request) => {
       if (request.method === 'HEAD' && request.key === uploadKey) {
         proxy.after = undefined;
-        const put = await fetch(`${standIn}/${process.env.S3_BUCKET}/${uploadKey}`, { method: 'PUT', body: Uint8Array.from(replacement), headers: { 'content-type': 'image/webp' } });
+        const put = await fetch(`${standIn}/${process.env.S3_BUCKET}/${uploadKey}`, {
+          method: 'PUT',
+          body: Uint8Array.from(replacement),
+          headers: { 'content-type': 'image/webp' },
+        });
         expect(put.ok).toBe(true);
       }
     };

@@ -91,10 +91,14 @@ describe.skipIf(!existsSync(CHROMIUM))('the photo picker in a browser', () => {
     ]);
 
     await expect.poll(() => rowOf(page, 'living-room.jpg').textContent(), { timeout: 15_000 }).toContain('Added.');
-    await expect.poll(() => rowOf(page, 'plan.svg').textContent(), { timeout: 10_000 }).toContain("This file isn't a photo we can use. JPEG, PNG or WebP, please.");
-    await expect.poll(() => rowOf(page, 'holiday.jpg').textContent(), { timeout: 10_000 }).toContain("This file isn't a photo we can use. JPEG, PNG or WebP, please.");
+    await expect
+      .poll(() => rowOf(page, 'plan.svg').textContent(), { timeout: 10_000 })
+      .toContain("This file isn't a photo we can use. JPEG, PNG or WebP, please.");
+    await expect
+      .poll(() => rowOf(page, 'holiday.jpg').textContent(), { timeout: 10_000 })
+      .toContain("This file isn't a photo we can use. JPEG, PNG or WebP, please.");
 
-    const picked = (await page.evaluate(() => (window as unknown as { pickedPhotos: { id: string; thumbnailUrl: string }[] }).pickedPhotos));
+    const picked = await page.evaluate(() => (window as unknown as { pickedPhotos: { id: string; thumbnailUrl: string }[] }).pickedPhotos);
     expect(picked).toHaveLength(1);
     // The thumbnail shown is the server's, loaded from storage through a signed link.
     const shown = rowOf(page, 'living-room.jpg').locator('img');
@@ -107,7 +111,12 @@ describe.skipIf(!existsSync(CHROMIUM))('the photo picker in a browser', () => {
     const stored = await sharp((await getObjectBuffer(row.imageKey!))!).metadata();
     expect(stored.exif).toBeUndefined();
     // Source: EXIF 2.32 Orientation 6: the stored top (red) shows on the right.
-    const [r, , b] = [...(await sharp((await getObjectBuffer(row.imageKey!))!).extract({ left: 1400, top: 1000, width: 1, height: 1 }).raw().toBuffer())];
+    const [r, , b] = [
+      ...(await sharp((await getObjectBuffer(row.imageKey!))!)
+        .extract({ left: 1400, top: 1000, width: 1, height: 1 })
+        .raw()
+        .toBuffer()),
+    ];
     expect(r).toBeGreaterThan(200);
     expect(b).toBeLessThan(60);
 

@@ -67,9 +67,23 @@ function widget(company: Company, token = issueFormToken(company.id).token, clie
     request: (file: FileFacts, body: Record<string, unknown> = { formToken: token, ...file }) =>
       callRoute(requestPhoto, { method: 'POST', path: `/api/embed/${slug}/photos`, params: { slug }, body, em: orm.em.fork(), clientAddress }),
     complete: (id: string, formToken = token) =>
-      callRoute(completePhoto, { method: 'POST', path: `/api/embed/${slug}/photos/${id}/complete`, params: { slug, id }, body: { formToken }, em: orm.em.fork(), clientAddress }),
+      callRoute(completePhoto, {
+        method: 'POST',
+        path: `/api/embed/${slug}/photos/${id}/complete`,
+        params: { slug, id },
+        body: { formToken },
+        em: orm.em.fork(),
+        clientAddress,
+      }),
     remove: (id: string, formToken = token) =>
-      callRoute(deletePhoto, { method: 'DELETE', path: `/api/embed/${slug}/photos/${id}`, params: { slug, id }, body: { formToken }, em: orm.em.fork(), clientAddress }),
+      callRoute(deletePhoto, {
+        method: 'DELETE',
+        path: `/api/embed/${slug}/photos/${id}`,
+        params: { slug, id },
+        body: { formToken },
+        em: orm.em.fork(),
+        clientAddress,
+      }),
     /** Request, upload and complete one file; answers every step. */
     async send(bytes: Buffer, { name = 'photo.jpg', type = 'image/jpeg', declaredSize = bytes.length } = {}) {
       const asked = await this.request({ name, size: declaredSize, type });
@@ -312,16 +326,27 @@ describe('limits and removal', () => {
     expect(missing.status).toBe(400);
     expect(((await missing.json()) as any).fields).toMatchObject({ size: 'The file size is missing.', type: 'The file type is missing.' });
 
-    const extra = await w.request({ name: 'x.jpg', size: 10, type: 'image/jpeg' }, { formToken: w.token, name: 'x.jpg', size: 10, type: 'image/jpeg', companyId: otherFirm.id });
+    const extra = await w.request(
+      { name: 'x.jpg', size: 10, type: 'image/jpeg' },
+      { formToken: w.token, name: 'x.jpg', size: 10, type: 'image/jpeg', companyId: otherFirm.id },
+    );
     expect(extra.status).toBe(400);
 
     const notJson = await callRoute(requestPhoto, {
-      method: 'POST', path: `/api/embed/${firm.slug}/photos`, params: { slug: firm.slug }, em: orm.em.fork(),
-      body: 'formToken=x', headers: { 'content-type': 'text/plain' }, clientAddress: address(),
+      method: 'POST',
+      path: `/api/embed/${firm.slug}/photos`,
+      params: { slug: firm.slug },
+      em: orm.em.fork(),
+      body: 'formToken=x',
+      headers: { 'content-type': 'text/plain' },
+      clientAddress: address(),
     });
     expect(notJson.status).toBe(415);
 
-    const forged = await w.request({ name: 'x.jpg', size: 10, type: 'image/jpeg' }, { formToken: `${w.token.split('.')[0]}.AAAA`, name: 'x.jpg', size: 10, type: 'image/jpeg' });
+    const forged = await w.request(
+      { name: 'x.jpg', size: 10, type: 'image/jpeg' },
+      { formToken: `${w.token.split('.')[0]}.AAAA`, name: 'x.jpg', size: 10, type: 'image/jpeg' },
+    );
     expect(forged.status).toBe(400);
     expect(((await forged.json()) as any).fields.formToken).toMatch(/reload the page/);
   });
@@ -330,8 +355,12 @@ describe('limits and removal', () => {
 describe('other firms and other drafts', () => {
   test('an unknown firm is 404; another firm’s form token is refused', async () => {
     const unknown = await callRoute(requestPhoto, {
-      method: 'POST', path: '/api/embed/no-such-firm-here/photos', params: { slug: 'no-such-firm-here' }, em: orm.em.fork(),
-      body: { formToken: issueFormToken(firm.id).token, name: 'a.jpg', size: 10, type: 'image/jpeg' }, clientAddress: address(),
+      method: 'POST',
+      path: '/api/embed/no-such-firm-here/photos',
+      params: { slug: 'no-such-firm-here' },
+      em: orm.em.fork(),
+      body: { formToken: issueFormToken(firm.id).token, name: 'a.jpg', size: 10, type: 'image/jpeg' },
+      clientAddress: address(),
     });
     expect(unknown.status).toBe(404);
     expect(await unknown.json()).toEqual({ error: 'No firm at this address.' });

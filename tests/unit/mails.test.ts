@@ -7,7 +7,14 @@ describe('expiry times in e-mails', () => {
     // Sent 2026-03-05 09:00 CST; a week of 168 hours later the clocks have gone forward.
     // Source: IANA tz database, northamerica: Rule US 2007 max Mar Sun>=8 2:00 (2026-03-08).
     const sent = Date.parse('2026-03-05T15:00:00Z');
-    const mail = inviteMail({ firmName: 'Firm', inviterName: 'Olive', role: 'sales', token: 'T', expiresAt: new Date(sent + 7 * 24 * 3_600_000), timeZone: 'America/Chicago' });
+    const mail = inviteMail({
+      firmName: 'Firm',
+      inviterName: 'Olive',
+      role: 'sales',
+      token: 'T',
+      expiresAt: new Date(sent + 7 * 24 * 3_600_000),
+      timeZone: 'America/Chicago',
+    });
     expect(mail.text).toContain('expires on Thu, Mar 12, 2026, 10:00 AM CDT.');
     expect(mail.text).not.toContain('GMT');
   });

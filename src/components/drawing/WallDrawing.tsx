@@ -107,9 +107,7 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
       <rect x={0} y={0} width={r(L)} height={r(H)} fill={PAPER} stroke={INK} strokeWidth={1.25} vectorEffect="non-scaling-stroke" />
 
       {/* Shiplap gaps read as darker lines: the band is dark and the boards sit on it. */}
-      {shiplap && (
-        <rect className="gaps" x={0} y={y(wall.bandTop)} width={r(L)} height={r(wall.bandTop - wall.bandBottom)} fill={GAP} />
-      )}
+      {shiplap && <rect className="gaps" x={0} y={y(wall.bandTop)} width={r(L)} height={r(wall.bandTop - wall.bandBottom)} fill={GAP} />}
 
       <g className="pieces">
         {wall.pieces.map((p, i) => (

@@ -15,7 +15,7 @@ function parse(text: string): Parsed {
 
 /** A small hands-on taste of the estimating core on the landing page: one run of boards. */
 export default function BoardRunTry() {
-  const [wall, setWall] = useState("11' 4\"");
+  const [wall, setWall] = useState('11\' 4"');
   const [board, setBoard] = useState('5 1/2');
   const [gap, setGap] = useState('1/8');
   const inputs = { wall: parse(wall), board: parse(board), gap: parse(gap) };

@@ -151,8 +151,12 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
       </h2>
       <div className="mt-4">
         {current.id === 'rooms' && <RoomsStep rooms={draft.rooms} units={units} errors={visibleErrors} onChange={(rooms) => setDraft({ ...draft, rooms })} />}
-        {current.id === 'treatment' && <TreatmentStep treatments={treatments} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />}
-        {current.id === 'options' && <OptionsStep draft={draft} onChange={(patch) => setDraft({ ...draft, ...patch })} onRoomsChange={(rooms) => setDraft({ ...draft, rooms })} />}
+        {current.id === 'treatment' && (
+          <TreatmentStep treatments={treatments} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
+        )}
+        {current.id === 'options' && (
+          <OptionsStep draft={draft} onChange={(patch) => setDraft({ ...draft, ...patch })} onRoomsChange={(rooms) => setDraft({ ...draft, rooms })} />
+        )}
         {current.id === 'photos' && (
           <div className="space-y-3">
             <p className="text-slate">Photos of the walls help {firmName} give you a tighter range. Up to 10, optional.</p>
@@ -175,7 +179,9 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
             </Suspense>
             {sendError && (
               <p role="alert" className="field-error mt-3">
-                {sendError.status === 400 && Object.keys(sendError.fields).some((k) => !k.startsWith('contact.')) ? 'Some earlier answers need another look. ' : ''}
+                {sendError.status === 400 && Object.keys(sendError.fields).some((k) => !k.startsWith('contact.'))
+                  ? 'Some earlier answers need another look. '
+                  : ''}
                 {sendError.message}
               </p>
             )}

@@ -11,13 +11,25 @@ export function Counter({ label, value, onChange, max = 20 }: Props) {
         {label}
       </span>
       <span className="flex items-center gap-2">
-        <button type="button" className="h-9 w-9 rounded-full border border-slate/40 text-lg leading-none disabled:opacity-40" aria-label={`Fewer ${label.toLowerCase()}`} disabled={value <= 0} onClick={() => onChange(value - 1)}>
+        <button
+          type="button"
+          className="h-9 w-9 rounded-full border border-slate/40 text-lg leading-none disabled:opacity-40"
+          aria-label={`Fewer ${label.toLowerCase()}`}
+          disabled={value <= 0}
+          onClick={() => onChange(value - 1)}
+        >
           −
         </button>
         <output className="figures w-6 text-center" aria-live="polite">
           {value}
         </output>
-        <button type="button" className="h-9 w-9 rounded-full border border-slate/40 text-lg leading-none disabled:opacity-40" aria-label={`More ${label.toLowerCase()}`} disabled={value >= max} onClick={() => onChange(value + 1)}>
+        <button
+          type="button"
+          className="h-9 w-9 rounded-full border border-slate/40 text-lg leading-none disabled:opacity-40"
+          aria-label={`More ${label.toLowerCase()}`}
+          disabled={value >= max}
+          onClick={() => onChange(value + 1)}
+        >
           +
         </button>
       </span>

@@ -2,13 +2,28 @@ import type { Draft, RoomDraft } from './draft';
 
 type Props = { draft: Draft; onChange: (patch: Partial<Draft>) => void; onRoomsChange: (rooms: RoomDraft[]) => void };
 
-function Choice<T extends string>({ legend, name, value, options, onChange }: { legend: string; name: string; value: T; options: [T, string][]; onChange: (v: T) => void }) {
+function Choice<T extends string>({
+  legend,
+  name,
+  value,
+  options,
+  onChange,
+}: {
+  legend: string;
+  name: string;
+  value: T;
+  options: [T, string][];
+  onChange: (v: T) => void;
+}) {
   return (
     <fieldset>
       <legend className="field-label">{legend}</legend>
       <div className="mt-1 flex flex-wrap gap-2">
         {options.map(([option, label]) => (
-          <label key={option} className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${value === option ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}>
+          <label
+            key={option}
+            className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${value === option ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
+          >
             <input type="radio" className="sr-only" name={name} checked={value === option} onChange={() => onChange(option)} />
             {label}
           </label>
@@ -25,8 +40,20 @@ export function OptionsStep({ draft, onChange, onRoomsChange }: Props) {
   ];
   return (
     <div className="space-y-5">
-      <Choice legend="Replace the baseboard too?" name="baseboard" value={draft.replaceBaseboard ? 'yes' : 'no'} options={yesNo} onChange={(v) => onChange({ replaceBaseboard: v === 'yes' })} />
-      <Choice legend="Should the firm prime and paint the new work?" name="paint" value={draft.paint ? 'yes' : 'no'} options={yesNo} onChange={(v) => onChange({ paint: v === 'yes' })} />
+      <Choice
+        legend="Replace the baseboard too?"
+        name="baseboard"
+        value={draft.replaceBaseboard ? 'yes' : 'no'}
+        options={yesNo}
+        onChange={(v) => onChange({ replaceBaseboard: v === 'yes' })}
+      />
+      <Choice
+        legend="Should the firm prime and paint the new work?"
+        name="paint"
+        value={draft.paint ? 'yes' : 'no'}
+        options={yesNo}
+        onChange={(v) => onChange({ paint: v === 'yes' })}
+      />
       <Choice
         legend="Was the home built before 1978?"
         name="built"

@@ -156,10 +156,12 @@ export default function PhotoPicker({ slug, formToken, onChange, onBusyChange }:
   /** One file at a time: decoding several 12-megapixel photos at once can run a phone out of memory. */
   const enqueue = useCallback(
     (key: string) => {
-      queue.current = queue.current.then(() => process(key)).catch(() => {
-        const job = jobs.current.get(key);
-        if (job && !job.removed) fail(key, job.file.name, 'Something went wrong. Please try again.');
-      });
+      queue.current = queue.current
+        .then(() => process(key))
+        .catch(() => {
+          const job = jobs.current.get(key);
+          if (job && !job.removed) fail(key, job.file.name, 'Something went wrong. Please try again.');
+        });
     },
     [process, fail],
   );
@@ -169,8 +171,8 @@ export default function PhotoPicker({ slug, formToken, onChange, onBusyChange }:
       const room = MAX_PHOTOS - itemsRef.current.filter((item) => item.step !== 'refused').length;
       const taken = accepted.slice(0, Math.max(0, room));
       const left = accepted.slice(taken.length);
-      const messages = rejected.map(({ file, errors }) =>
-        `${file.name}: ${errors.some((e) => e.code === 'file-too-large') ? PHOTO_MESSAGES.tooBig : PHOTO_MESSAGES.notAPhoto}`,
+      const messages = rejected.map(
+        ({ file, errors }) => `${file.name}: ${errors.some((e) => e.code === 'file-too-large') ? PHOTO_MESSAGES.tooBig : PHOTO_MESSAGES.notAPhoto}`,
       );
       if (left.length) messages.push(`${PHOTO_MESSAGES.tooMany} We left out ${left.map((f) => f.name).join(', ')}.`);
       setNotices(messages);
@@ -325,9 +327,7 @@ function PhotoRow({ item, onRetry, onRemove }: { item: Item; onRetry: () => void
         <p className="truncate text-sm font-medium text-ink" title={item.name}>
           {item.name}
         </p>
-        <p className={`text-sm ${trouble ? 'text-brick' : 'text-slate'}`}>
-          {statusText(item)}
-        </p>
+        <p className={`text-sm ${trouble ? 'text-brick' : 'text-slate'}`}>{statusText(item)}</p>
         {item.step === 'uploading' && (
           <div
             role="progressbar"

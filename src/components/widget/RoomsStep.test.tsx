@@ -6,7 +6,9 @@ import { RoomsStep } from './RoomsStep';
 describe('RoomsStep', () => {
   it('shows a message about the project as a whole, such as one too big for an online estimate', () => {
     const message = 'This project is too big for one online estimate: 130 walls (at most 120).';
-    const html = renderToStaticMarkup(<RoomsStep rooms={[newRoom('imperial', 'Hallway')]} units="imperial" errors={{ 'project.rooms': message }} onChange={() => {}} />);
+    const html = renderToStaticMarkup(
+      <RoomsStep rooms={[newRoom('imperial', 'Hallway')]} units="imperial" errors={{ 'project.rooms': message }} onChange={() => {}} />,
+    );
     expect(html).toContain(`role="alert">${message}</p>`);
   });
 });

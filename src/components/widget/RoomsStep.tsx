@@ -49,7 +49,10 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
 
             <div role="radiogroup" aria-label="How would you like to give the sizes?" className="grid grid-cols-2 gap-2">
               {(['room', 'walls'] as const).map((mode) => (
-                <label key={mode} className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}>
+                <label
+                  key={mode}
+                  className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
+                >
                   <input type="radio" className="sr-only" name={`${domId}-mode`} checked={room.mode === mode} onChange={() => update(r, { mode })} />
                   {mode === 'room' ? 'Room length × width' : 'Wall by wall'}
                 </label>
@@ -97,7 +100,12 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                       />
                     </div>
                     {room.walls.length > 1 && (
-                      <button type="button" className="button-quiet mb-0.5 px-3" aria-label={`Remove wall ${w + 1}`} onClick={() => update(r, { walls: room.walls.filter((_, i) => i !== w) })}>
+                      <button
+                        type="button"
+                        className="button-quiet mb-0.5 px-3"
+                        aria-label={`Remove wall ${w + 1}`}
+                        onClick={() => update(r, { walls: room.walls.filter((_, i) => i !== w) })}
+                      >
                         Remove
                       </button>
                     )}
@@ -112,7 +120,12 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
             )}
             <p className="text-xs text-slate">{hint}</p>
 
-            <LengthField label="Ceiling height" value={room.ceilingHeight} onChange={(ceilingHeight) => update(r, { ceilingHeight })} error={errors[`${at}.ceilingHeight`]} />
+            <LengthField
+              label="Ceiling height"
+              value={room.ceilingHeight}
+              onChange={(ceilingHeight) => update(r, { ceilingHeight })}
+              error={errors[`${at}.ceilingHeight`]}
+            />
 
             <div className="grid gap-2 sm:grid-cols-2">
               <Counter label="Doors" value={room.doors} onChange={(doors) => update(r, { doors })} />
@@ -143,7 +156,11 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
         </p>
       )}
       {rooms.length < 20 && (
-        <button type="button" className="button-quiet w-full" onClick={() => onChange([...rooms, newRoom(units, ROOM_NAMES[rooms.length % ROOM_NAMES.length])])}>
+        <button
+          type="button"
+          className="button-quiet w-full"
+          onClick={() => onChange([...rooms, newRoom(units, ROOM_NAMES[rooms.length % ROOM_NAMES.length])])}
+        >
           Add another room
         </button>
       )}

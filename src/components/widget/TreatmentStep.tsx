@@ -35,7 +35,10 @@ export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
         <legend className="text-base font-bold">How high?</legend>
         <div className="mt-3 grid grid-cols-2 gap-2">
           {(['wainscot', 'full'] as const).map((height) => (
-            <label key={height} className={`cursor-pointer rounded-md border px-3 py-3 text-sm ${draft.height === height ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}>
+            <label
+              key={height}
+              className={`cursor-pointer rounded-md border px-3 py-3 text-sm ${draft.height === height ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
+            >
               <input type="radio" name="height" className="sr-only" checked={draft.height === height} onChange={() => onChange({ height })} />
               {height === 'wainscot' ? 'Lower wall, finished with a cap rail' : 'Full height, floor to ceiling'}
             </label>

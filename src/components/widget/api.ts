@@ -30,6 +30,9 @@ export function fetchEstimate(slug: string, formToken: string, project: ProjectI
 
 export type SentLead = { lead: { reference: string; viewUrl: string | null }; estimate: HomeownerEstimate | null };
 
-export function sendLead(slug: string, body: { formToken: string; idempotencyKey: string; project: ProjectInput; contact: ContactInput; website?: string }): Promise<SentLead> {
+export function sendLead(
+  slug: string,
+  body: { formToken: string; idempotencyKey: string; project: ProjectInput; contact: ContactInput; website?: string },
+): Promise<SentLead> {
   return postJson<SentLead>(`/api/embed/${slug}/leads`, body);
 }

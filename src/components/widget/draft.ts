@@ -121,10 +121,7 @@ export function toProject(draft: Draft, units: Units): { project: ProjectInput |
     const switches = spread(room.switches, n);
     walls = walls.map((wall, i) => ({
       ...wall,
-      openings: [
-        ...(doors[i] ? [{ kind: 'door' as const, count: doors[i] }] : []),
-        ...(windows[i] ? [{ kind: 'window' as const, count: windows[i] }] : []),
-      ],
+      openings: [...(doors[i] ? [{ kind: 'door' as const, count: doors[i] }] : []), ...(windows[i] ? [{ kind: 'window' as const, count: windows[i] }] : [])],
       outlets: outlets[i],
       switches: switches[i],
     }));

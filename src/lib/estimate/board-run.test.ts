@@ -25,20 +25,19 @@ describe('boardRun', () => {
   });
 
   // Property: boards and gaps exactly fill the run (common practice, no source: the layout rule itself).
-  fcTest.prop([
-    fc.double({ min: 1, max: 1200, noNaN: true }),
-    fc.double({ min: 0.5, max: 12, noNaN: true }),
-    fc.double({ min: 0, max: 1, noNaN: true }),
-  ])('boards and gaps exactly fill the run', (run, width, gap) => {
-    const r = boardRun(run, width, gap);
-    expect(r.count).toBeGreaterThanOrEqual(1);
-    expect(r.lastWidth).toBeGreaterThan(0);
-    expect(r.lastWidth).toBeLessThanOrEqual(width + 1e-9);
-    expect(r.leftover).toBeGreaterThanOrEqual(0);
-    expect(r.leftover).toBeLessThanOrEqual(gap + 1e-6);
-    expect((r.count - 1) * (width + gap) + r.lastWidth + r.leftover).toBeCloseTo(run, 6);
-    const pos = boardPositions(run, width, gap);
-    expect(pos).toHaveLength(r.count);
-    expect(pos.at(-1)!.start + pos.at(-1)!.width + r.leftover).toBeCloseTo(run, 6);
-  });
+  fcTest.prop([fc.double({ min: 1, max: 1200, noNaN: true }), fc.double({ min: 0.5, max: 12, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true })])(
+    'boards and gaps exactly fill the run',
+    (run, width, gap) => {
+      const r = boardRun(run, width, gap);
+      expect(r.count).toBeGreaterThanOrEqual(1);
+      expect(r.lastWidth).toBeGreaterThan(0);
+      expect(r.lastWidth).toBeLessThanOrEqual(width + 1e-9);
+      expect(r.leftover).toBeGreaterThanOrEqual(0);
+      expect(r.leftover).toBeLessThanOrEqual(gap + 1e-6);
+      expect((r.count - 1) * (width + gap) + r.lastWidth + r.leftover).toBeCloseTo(run, 6);
+      const pos = boardPositions(run, width, gap);
+      expect(pos).toHaveLength(r.count);
+      expect(pos.at(-1)!.start + pos.at(-1)!.width + r.leftover).toBeCloseTo(run, 6);
+    },
+  );
 });

@@ -86,7 +86,9 @@ export function cautionsFor(project: Project, rooms: RoomTakeoff[], catalogue: C
       text:
         'Standard MDF swells when it gets wet. In a damp room the work should use moisture-resistant MDF or solid wood, ' +
         'with every face, edge and cut end primed and the bottom edges sealed, and a good bathroom fan helps it last. ' +
-        (notMr.length > 0 ? `The material chosen for ${notMr.map((r) => r.name).join(', ')} is not listed as moisture resistant; we will suggest an alternative. ` : '') +
+        (notMr.length > 0
+          ? `The material chosen for ${notMr.map((r) => r.name).join(', ')} is not listed as moisture resistant; we will suggest an alternative. `
+          : '') +
         'Your local building code governs materials in wet areas.',
       rooms: namesOf(damp),
     });

@@ -10,7 +10,11 @@ import { estimate, EstimateInputError, parseRateBook, projectSchema, sampleRateB
 const TREATMENTS = ['shiplap-vertical-ply', 'shiplap-horizontal', 'board-and-batten', 'beadboard', 'flat-panel', 'picture-frame'] as const;
 const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined });
 /** Inches on the schema's own range, in sixteenths, sometimes at its ends. */
-const inches = (min: number, max: number) => fc.oneof(fc.constantFrom(min, max), fc.integer({ min: min * 16, max: max * 16 }).map((x) => x / 16));
+const inches = (min: number, max: number) =>
+  fc.oneof(
+    fc.constantFrom(min, max),
+    fc.integer({ min: min * 16, max: max * 16 }).map((x) => x / 16),
+  );
 
 // Any value the schema takes, fields combined freely: most such projects fail the wall checks,
 // which must then come back as field messages.
@@ -57,7 +61,15 @@ const anyRoom = fc.record(
 
 // Projects that also pass the wall checks: openings fit their wall and ceiling, placed ones do not overlap.
 const unit = fc.double({ min: 0, max: 1, noNaN: true });
-const openingShape = fc.record({ kind: fc.constantFrom('door' as const, 'window' as const), count: fc.integer({ min: 1, max: 3 }), w: unit, h: unit, sill: unit, at: unit, placed: fc.boolean() });
+const openingShape = fc.record({
+  kind: fc.constantFrom('door' as const, 'window' as const),
+  count: fc.integer({ min: 1, max: 3 }),
+  w: unit,
+  h: unit,
+  sill: unit,
+  at: unit,
+  placed: fc.boolean(),
+});
 type Shape = { kind: 'door' | 'window'; count: number; w: number; h: number; sill: number; at: number; placed: boolean };
 
 function openingsFor(shapes: Shape[], length: number, ceiling: number, measured: boolean): ProjectInput['rooms'][number]['walls'][number]['openings'] {
@@ -86,7 +98,14 @@ const validRoom = fc
     height: fc.constantFrom('wainscot' as const, 'full' as const),
     wainscot: optional(unit),
     walls: fc.array(
-      fc.record({ by: fc.constantFrom('length' as const, 'side-length' as const, 'side-width' as const), length: inches(12, 1200), measured: fc.boolean(), openings: fc.array(openingShape, { maxLength: 4 }), outlets: fc.integer({ min: 0, max: 40 }), switches: fc.integer({ min: 0, max: 40 }) }),
+      fc.record({
+        by: fc.constantFrom('length' as const, 'side-length' as const, 'side-width' as const),
+        length: inches(12, 1200),
+        measured: fc.boolean(),
+        openings: fc.array(openingShape, { maxLength: 4 }),
+        outlets: fc.integer({ min: 0, max: 40 }),
+        switches: fc.integer({ min: 0, max: 40 }),
+      }),
       { minLength: 1, maxLength: 4 },
     ),
     replaceBaseboard: fc.boolean(),
@@ -151,7 +170,8 @@ const rateBook: fc.Arbitrary<RateBookInput> = fc
     for (const m of c.mouldings) Object.assign(m, { length: v.mouldingLength, thickness: v.thickness });
     for (const b of c.boards) b.length = v.boardLength;
     for (const t of c.treatments) {
-      if (t.kind === 'picture-frame') Object.assign(t, { targetFrameWidth: v.targetFrameWidth, margin: v.margin, frameGap: v.frameGap, fullHeightRows: v.rows });
+      if (t.kind === 'picture-frame')
+        Object.assign(t, { targetFrameWidth: v.targetFrameWidth, margin: v.margin, frameGap: v.frameGap, fullHeightRows: v.rows });
       if (t.kind === 'shiplap') {
         t.gap = v.gap;
         if (t.source.from === 'sheet') t.source.stripWidth = v.stripWidth;

@@ -101,7 +101,10 @@ describe('cautions', () => {
 
   // Source: TRADE.md §5 — removing 60 ft of 5.5 in painted baseboard disturbs 27.5 sq ft (> 6 sq ft) → RRP applies; 12 ft → 5.5 sq ft (minor repair).
   it('charges lead-safe set-up when removed painted baseboard passes 6 sq ft in a room', () => {
-    const p = (len: number): ProjectInput => ({ ...oneWall(len, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }), rooms: [{ ...oneWall(len, 'beadboard', 'wainscot').rooms[0]!, replaceBaseboard: true, walls: [{ length: len }] }] });
+    const p = (len: number): ProjectInput => ({
+      ...oneWall(len, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }),
+      rooms: [{ ...oneWall(len, 'beadboard', 'wainscot').rooms[0]!, replaceBaseboard: true, walls: [{ length: len }] }],
+    });
     const big = estimate(p(60 * 12), rateBook);
     expect(big.takeoff.rooms[0]!.disturbedPaintSqFt).toBeCloseTo((720 * 5.25) / 144, 9);
     expect(big.price.lines.some((l) => l.label === 'Lead-safe set-up')).toBe(true);

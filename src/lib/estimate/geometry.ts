@@ -70,7 +70,10 @@ export function placeOpenings(openings: Opening[], wallLength: number): Array<Om
   }
   if (loose.length === 0) return fixed.sort((a, b) => a.offset - b.offset);
   // Spread the loose ones evenly through the free stretches, in proportion to their length.
-  const free = subtractIntervals([0, wallLength], fixed.map((f) => [f.offset, f.offset + f.width] as const));
+  const free = subtractIntervals(
+    [0, wallLength],
+    fixed.map((f) => [f.offset, f.offset + f.width] as const),
+  );
   const freeTotal = free.reduce((s, [a, b]) => s + (b - a), 0);
   const looseWidth = loose.reduce((s, o) => s + o.width, 0);
   const space = Math.max(0, freeTotal - looseWidth) / (loose.length + 1);

@@ -27,15 +27,48 @@ export function labourFor(takeoff: Takeoff, rateBook: RateBook): LabourLine[] {
   const perItem = (task: LabourLine['task'], label: string, n: number, each: number, what: string): void => {
     if (n > 0 && each > 0) lines.push({ task, label, hours: n * each, basis: `${r2(n)} ${what} × ${each} h each` });
   };
-  perItem('cut-outs', 'Cut-outs for outlets and switches', sum((r) => r.cutOuts), L.hoursPerCutOut, 'cut-outs');
-  perItem('returns', 'Returns at windows and doors', sum((r) => r.returns), L.hoursPerReturn, 'returns');
-  perItem('corners', 'Inside and outside corners', sum((r) => r.insideCorners + r.outsideCorners), L.hoursPerCorner, 'corners');
+  perItem(
+    'cut-outs',
+    'Cut-outs for outlets and switches',
+    sum((r) => r.cutOuts),
+    L.hoursPerCutOut,
+    'cut-outs',
+  );
+  perItem(
+    'returns',
+    'Returns at windows and doors',
+    sum((r) => r.returns),
+    L.hoursPerReturn,
+    'returns',
+  );
+  perItem(
+    'corners',
+    'Inside and outside corners',
+    sum((r) => r.insideCorners + r.outsideCorners),
+    L.hoursPerCorner,
+    'corners',
+  );
   const perFoot = (task: LabourLine['task'], label: string, feet: number, each: number): void => {
     if (feet > 0 && each > 0) lines.push({ task, label, hours: feet * each, basis: `${r2(feet)} ft × ${each} h per ft` });
   };
-  perFoot('baseboard-removal', 'Remove old baseboard', sum((r) => r.baseboardRemovedFeet), L.hoursPerFootBaseboardRemoved);
-  perFoot('baseboard', 'Install new baseboard', sum((r) => r.baseboardRemovedFeet), L.hoursPerFootBaseboardInstalled);
-  perFoot('cap-rail', 'Install cap rail', sum((r) => r.capRailFeet), L.hoursPerFootCapRail);
+  perFoot(
+    'baseboard-removal',
+    'Remove old baseboard',
+    sum((r) => r.baseboardRemovedFeet),
+    L.hoursPerFootBaseboardRemoved,
+  );
+  perFoot(
+    'baseboard',
+    'Install new baseboard',
+    sum((r) => r.baseboardRemovedFeet),
+    L.hoursPerFootBaseboardInstalled,
+  );
+  perFoot(
+    'cap-rail',
+    'Install cap rail',
+    sum((r) => r.capRailFeet),
+    L.hoursPerFootCapRail,
+  );
   if (takeoff.paintSqFt > 0) {
     lines.push({
       task: 'paint',

@@ -166,8 +166,16 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
       });
     };
     const primed = rooms.filter((r) => catalogue.treatments.find((t) => t.id === r.treatmentId)?.needsPrimer);
-    coating('primer', s.primer, primed.reduce((acc, r) => acc + r.paintSqFt, 0));
-    coating('paint', s.paint, sum((r) => r.paintSqFt));
+    coating(
+      'primer',
+      s.primer,
+      primed.reduce((acc, r) => acc + r.paintSqFt, 0),
+    );
+    coating(
+      'paint',
+      s.paint,
+      sum((r) => r.paintSqFt),
+    );
   }
   const extenders = sum((r) => r.cutOuts);
   if (extenders > 0) {

@@ -42,7 +42,15 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
   for (const l of labour) {
     const total = Math.round(l.hours * rateBook.labour.rateCents);
     labourCents += total;
-    lines.push({ group: 'labour', label: l.label, quantity: r2(l.hours), unit: 'hour', unitCents: rateBook.labour.rateCents, totalCents: total, basis: l.basis });
+    lines.push({
+      group: 'labour',
+      label: l.label,
+      quantity: r2(l.hours),
+      unit: 'hour',
+      unitCents: rateBook.labour.rateCents,
+      totalCents: total,
+      basis: l.basis,
+    });
   }
 
   let extrasCents = 0;

@@ -1,6 +1,16 @@
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
-import { checkProjectSize, estimate, EstimateInputError, parseRateBook, PROJECT_LIMITS, projectSize, sampleRateBook, validateProject, type ProjectInput } from './index.ts';
+import {
+  checkProjectSize,
+  estimate,
+  EstimateInputError,
+  parseRateBook,
+  PROJECT_LIMITS,
+  projectSize,
+  sampleRateBook,
+  validateProject,
+  type ProjectInput,
+} from './index.ts';
 import { biggestAcceptedProject, costliestAcceptedProject, largeHouse, schemaMaximumProject } from './sample-big-projects.ts';
 
 const rateBook = parseRateBook(sampleRateBook());
@@ -40,7 +50,12 @@ describe('the size of a project is checked before it is computed', () => {
     const t = rb.catalogue.treatments.find((x) => x.id === 'shiplap-vertical-ply')!;
     Object.assign(t, { orientation: 'horizontal', source: { from: 'sheet', sheetId: 'ply-4x8-quarter', stripWidth: 1 }, gap: 0 });
     const parsed = parseRateBook(rb);
-    const room = { name: 'Hall', ceilingHeight: 120, walls: Array.from({ length: 6 }, () => ({ length: 1200 })), treatment: { id: 'shiplap-vertical-ply', height: 'full' as const } };
+    const room = {
+      name: 'Hall',
+      ceilingHeight: 120,
+      walls: Array.from({ length: 6 }, () => ({ length: 1200 })),
+      treatment: { id: 'shiplap-vertical-ply', height: 'full' as const },
+    };
     const p: ProjectInput = { rooms: [room], builtBefore1978: 'no', measuredBy: 'homeowner-tape' };
     const size = projectSize(validateProject(p, parsed.catalogue), parsed.catalogue);
     expect(size.rooms[0]!.pieces).toBe(6 * (115 * 13 + 2));

@@ -71,11 +71,25 @@ function wallPieces(room: Room, length: number, openings: Array<{ width: number;
   const sheet = (id: string) => c.sheets.find((s) => s.id === id);
   const panels = (sheetId: string | undefined): void => {
     const s = sheetId ? sheet(sheetId) : undefined;
-    if (s) pieces += coursePieces(length, s.width, height, Math.max(s.width, s.height), openings.map((o) => o.width));
+    if (s)
+      pieces += coursePieces(
+        length,
+        s.width,
+        height,
+        Math.max(s.width, s.height),
+        openings.map((o) => o.width),
+      );
   };
   const uprights = (id: string, spacing: number): void => {
     const b = board(id);
-    if (b) pieces += coursePieces(length + spacing, spacing, height, b.length, openings.map((o) => o.width));
+    if (b)
+      pieces += coursePieces(
+        length + spacing,
+        spacing,
+        height,
+        b.length,
+        openings.map((o) => o.width),
+      );
   };
   const rail = (id: string | undefined): void => {
     const b = id ? board(id) : undefined;
@@ -90,8 +104,20 @@ function wallPieces(room: Room, length: number, openings: Array<{ width: number;
       const pitch = face + t.gap;
       pieces +=
         t.orientation === 'horizontal'
-          ? coursePieces(height, pitch, length, stock, openings.map((o) => o.height))
-          : coursePieces(length, pitch, height, stock, openings.map((o) => o.width));
+          ? coursePieces(
+              height,
+              pitch,
+              length,
+              stock,
+              openings.map((o) => o.height),
+            )
+          : coursePieces(
+              length,
+              pitch,
+              height,
+              stock,
+              openings.map((o) => o.width),
+            );
       break;
     }
     case 'beadboard':
@@ -161,9 +187,11 @@ export function checkProjectSize(project: Project, catalogue: Catalogue, limits:
   size.rooms.forEach((room, r) => {
     const path = `rooms.${r}.walls`;
     if (room.coveredSqFt > limits.roomCoveredSqFt) {
-      fields[path] = `These walls cover about ${n(room.coveredSqFt)} sq ft; an online estimate takes at most ${n(limits.roomCoveredSqFt)} sq ft in one room. Check the wall lengths and ceiling height.`;
+      fields[path] =
+        `These walls cover about ${n(room.coveredSqFt)} sq ft; an online estimate takes at most ${n(limits.roomCoveredSqFt)} sq ft in one room. Check the wall lengths and ceiling height.`;
     } else if (room.pieces > limits.roomPieces) {
-      fields[path] = `These walls would take about ${n(room.pieces)} boards and pieces; an online estimate lays out at most ${n(limits.roomPieces)} in one room. Check the wall lengths and ceiling height, or split the room.`;
+      fields[path] =
+        `These walls would take about ${n(room.pieces)} boards and pieces; an online estimate lays out at most ${n(limits.roomPieces)} in one room. Check the wall lengths and ceiling height, or split the room.`;
     }
   });
   const whole: string[] = [];

@@ -18,7 +18,15 @@ export function sampleRateBook(): RateBookInput {
       sheets: [
         { id: 'ply-4x8-quarter', name: '1/4 in sanded plywood, 4 × 8 ft', width: 48, height: 96, thickness: 0.25, priceCents: 3200 },
         { id: 'mdf-4x8-quarter', name: '1/4 in MDF, 4 × 8 ft', width: 48, height: 96, thickness: 0.25, priceCents: 2400 },
-        { id: 'mr-mdf-4x8-half', name: '1/2 in moisture-resistant MDF, 4 × 8 ft', width: 48, height: 96, thickness: 0.5, priceCents: 5600, moistureResistant: true },
+        {
+          id: 'mr-mdf-4x8-half',
+          name: '1/2 in moisture-resistant MDF, 4 × 8 ft',
+          width: 48,
+          height: 96,
+          thickness: 0.5,
+          priceCents: 5600,
+          moistureResistant: true,
+        },
         { id: 'beadboard-4x8', name: 'Beadboard panel, 4 × 8 ft', width: 48, height: 96, thickness: 0.25, priceCents: 3800 },
       ],
       boards: [

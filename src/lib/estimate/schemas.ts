@@ -39,8 +39,7 @@ function text(label: string, max: number) {
     .min(1, { error: `${label} cannot be empty.` })
     .max(max, { error: `${label} must be at most ${max} characters.` });
 }
-const slug = (label: string) =>
-  text(label, 60).regex(/^[a-z0-9][a-z0-9-]*$/, { error: `${label} must use lowercase letters, digits and dashes.` });
+const slug = (label: string) => text(label, 60).regex(/^[a-z0-9][a-z0-9-]*$/, { error: `${label} must use lowercase letters, digits and dashes.` });
 function choice<const T extends readonly [string, ...string[]]>(label: string, values: T) {
   return z.enum(values, { error: `${label} must be one of: ${values.join(', ')}.` });
 }
@@ -88,7 +87,10 @@ export const roomSchema = z.strictObject({
   /** Room length and width, for walls given by `side`. */
   length: inches('Room length', 24, 1200).optional(),
   width: inches('Room width', 24, 1200).optional(),
-  walls: z.array(wallSchema, { error: 'Walls must be a list.' }).min(1, { error: 'Add at least one wall to cover.' }).max(16, { error: 'At most 16 walls per room.' }),
+  walls: z
+    .array(wallSchema, { error: 'Walls must be a list.' })
+    .min(1, { error: 'Add at least one wall to cover.' })
+    .max(16, { error: 'At most 16 walls per room.' }),
   insideCorners: count('Inside corners', 40).optional(),
   outsideCorners: count('Outside corners', 40).optional(),
   treatment: roomTreatmentSchema,
@@ -98,7 +100,10 @@ export const roomSchema = z.strictObject({
 });
 
 export const projectSchema = z.strictObject({
-  rooms: z.array(roomSchema, { error: 'Rooms must be a list.' }).min(1, { error: 'Add at least one room.' }).max(20, { error: 'At most 20 rooms per estimate.' }),
+  rooms: z
+    .array(roomSchema, { error: 'Rooms must be a list.' })
+    .min(1, { error: 'Add at least one room.' })
+    .max(20, { error: 'At most 20 rooms per estimate.' }),
   /** Whether the firm primes and paints the new work. */
   paint: flag('Painting').default(false),
   builtBefore1978: choice('Built before 1978', BUILT_BEFORE_1978),
@@ -174,14 +179,17 @@ export const mouldingStockSchema = z
      * from the shortest of these that fits; one longer than all of them is joined.
      */
     longerLengths: z
-      .array(z.strictObject({ length: inches('Longer stock length', 24, 240), priceCents: cents('Longer stock price') }), { error: 'Longer lengths must be a list.' })
+      .array(z.strictObject({ length: inches('Longer stock length', 24, 240), priceCents: cents('Longer stock price') }), {
+        error: 'Longer lengths must be a list.',
+      })
       .max(5, { error: 'At most 5 longer lengths per moulding.' })
       .default([]),
   })
   .superRefine((m, ctx) => {
     const seen = new Set<number>([m.length]);
     m.longerLengths.forEach((l, i) => {
-      if (l.length <= m.length) ctx.addIssue({ code: 'custom', path: ['longerLengths', i, 'length'], message: 'A longer length must be longer than the stock length.' });
+      if (l.length <= m.length)
+        ctx.addIssue({ code: 'custom', path: ['longerLengths', i, 'length'], message: 'A longer length must be longer than the stock length.' });
       else if (seen.has(l.length)) ctx.addIssue({ code: 'custom', path: ['longerLengths', i, 'length'], message: 'This length is listed twice.' });
       seen.add(l.length);
     });
@@ -289,11 +297,9 @@ export const pictureFrameSchema = z.strictObject({
   fullHeightRows: count('Rows of frames', 4).min(1, { error: 'Rows of frames must be at least 1.' }).default(2),
 });
 
-export const treatmentSchema = z.discriminatedUnion(
-  'kind',
-  [shiplapSchema, boardAndBattenSchema, beadboardSchema, flatPanelSchema, pictureFrameSchema],
-  { error: 'Treatment kind must be one of: shiplap, board-and-batten, beadboard, flat-panel, picture-frame.' },
-);
+export const treatmentSchema = z.discriminatedUnion('kind', [shiplapSchema, boardAndBattenSchema, beadboardSchema, flatPanelSchema, pictureFrameSchema], {
+  error: 'Treatment kind must be one of: shiplap, board-and-batten, beadboard, flat-panel, picture-frame.',
+});
 
 export const catalogueSchema = z.strictObject({
   /** Fraction added to field material (sheets, boards, mouldings) for offcuts, defects and mistakes. */
@@ -311,8 +317,7 @@ export const catalogueSchema = z.strictObject({
   treatments: z.array(treatmentSchema).min(1, { error: 'The catalogue needs at least one treatment.' }).max(50),
 });
 
-const spreadSchema = (label: string) =>
-  z.strictObject({ below: fraction(`${label}: below`, 0.9), above: fraction(`${label}: above`, 3) });
+const spreadSchema = (label: string) => z.strictObject({ below: fraction(`${label}: below`, 0.9), above: fraction(`${label}: above`, 3) });
 const methodSpreadSchema = (label: string) =>
   z.strictObject({ withPhotos: spreadSchema(`${label} with photos`), withoutPhotos: spreadSchema(`${label} without photos`) });
 
@@ -373,11 +378,31 @@ export const rateBookSchema = z
         seen.add(id);
       });
     };
-    unique(c.sheets.map((s) => s.id), 'sheets', 'sheets');
-    unique(c.boards.map((s) => s.id), 'boards', 'boards');
-    unique(c.mouldings.map((s) => s.id), 'mouldings', 'mouldings');
-    unique(c.treatments.map((s) => s.id), 'treatments', 'treatments');
-    unique(rb.extras.tripZones.map((s) => s.id), 'tripZones', 'trip zones');
+    unique(
+      c.sheets.map((s) => s.id),
+      'sheets',
+      'sheets',
+    );
+    unique(
+      c.boards.map((s) => s.id),
+      'boards',
+      'boards',
+    );
+    unique(
+      c.mouldings.map((s) => s.id),
+      'mouldings',
+      'mouldings',
+    );
+    unique(
+      c.treatments.map((s) => s.id),
+      'treatments',
+      'treatments',
+    );
+    unique(
+      rb.extras.tripZones.map((s) => s.id),
+      'tripZones',
+      'trip zones',
+    );
     need(mouldings, c.baseboardId, ['catalogue', 'baseboardId'], 'moulding');
     need(mouldings, c.capRailId, ['catalogue', 'capRailId'], 'moulding');
     c.treatments.forEach((t, i) => {

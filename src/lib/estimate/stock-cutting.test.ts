@@ -71,10 +71,7 @@ describe('stockPiecesNeeded', () => {
   // in a public AMPL file; integer optimum 73 computed in TRADE.md §12). The heuristic must stay within FFD's proven
   // bound 11/9·OPT + 6/9 (Dósa 2007) and can never beat the optimum.
   it('stays between the optimum and the FFD bound on the paper-roll example', () => {
-    const cuts = repeat(
-      [1380, 1520, 1560, 1710, 1820, 1880, 1930, 2000, 2050, 2100, 2140, 2150, 2200],
-      [22, 25, 12, 14, 18, 18, 20, 10, 12, 14, 16, 18, 20],
-    );
+    const cuts = repeat([1380, 1520, 1560, 1710, 1820, 1880, 1930, 2000, 2050, 2100, 2140, 2150, 2200], [22, 25, 12, 14, 18, 18, 20, 10, 12, 14, 16, 18, 20]);
     const n = stockPiecesNeeded(cuts, 5600);
     expect(n).toBeGreaterThanOrEqual(73);
     expect(n).toBeLessThanOrEqual(Math.floor((11 / 9) * 73 + 6 / 9));

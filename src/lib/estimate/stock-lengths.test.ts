@@ -77,6 +77,8 @@ describe('picture-frame moulding on a tall full-height wall', () => {
   it('refuses a longer length that is not longer', () => {
     const rb = sampleRateBook() as any;
     rb.catalogue.mouldings[2].longerLengths = [{ length: 96, priceCents: 1100 }];
-    expect(() => parseRateBook(rb)).toThrow(expect.objectContaining({ fields: { 'rateBook.catalogue.mouldings.2.longerLengths.0.length': 'A longer length must be longer than the stock length.' } }));
+    expect(() => parseRateBook(rb)).toThrow(
+      expect.objectContaining({ fields: { 'rateBook.catalogue.mouldings.2.longerLengths.0.length': 'A longer length must be longer than the stock length.' } }),
+    );
   });
 });

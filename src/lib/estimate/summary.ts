@@ -22,7 +22,8 @@ export function wallSummary(wall: WallTakeoff, units: Units, treatmentName?: str
   const doors = wall.openings.filter((o) => o.kind === 'door');
   const windows = wall.openings.filter((o) => o.kind === 'window');
   if (doors.length) parts.push(`${n(doors.length, 'door')} (${doors.map((o) => `${len(o.width)} × ${len(o.height)}`).join(', ')}).`);
-  if (windows.length) parts.push(`${n(windows.length, 'window')} (${windows.map((o) => `${len(o.width)} × ${len(o.height)}, sill ${len(o.sillHeight)}`).join('; ')}).`);
+  if (windows.length)
+    parts.push(`${n(windows.length, 'window')} (${windows.map((o) => `${len(o.width)} × ${len(o.height)}, sill ${len(o.sillHeight)}`).join('; ')}).`);
   const outlets = wall.boxes.filter((b) => b.kind === 'outlet').length;
   const switches = wall.boxes.filter((b) => b.kind === 'switch').length;
   if (outlets + switches > 0) {

@@ -79,9 +79,7 @@ interface WallContext {
 
 /** Vertical stretches of the band in the column [x0, x1] that no opening interrupts. */
 function columnIntervals(ctx: WallContext, x0: number, x1: number, bottom = ctx.bandBottom, top = ctx.bandTop): Interval[] {
-  const cuts = ctx.openings
-    .filter((o) => overlap(o.offset, o.offset + o.width, x0, x1) > 0.01)
-    .map((o) => [o.sillHeight, o.sillHeight + o.height] as const);
+  const cuts = ctx.openings.filter((o) => overlap(o.offset, o.offset + o.width, x0, x1) > 0.01).map((o) => [o.sillHeight, o.sillHeight + o.height] as const);
   return subtractIntervals([bottom, top], cuts, MIN_PIECE);
 }
 
@@ -89,7 +87,13 @@ function columnIntervals(ctx: WallContext, x0: number, x1: number, bottom = ctx.
  * A column [x0, x1] split at the edges of openings, each slice with its own vertical stretches: a board
  * or panel that straddles a door edge is notched around it rather than left out.
  */
-function columnSlices(ctx: WallContext, x0: number, x1: number, bottom = ctx.bandBottom, top = ctx.bandTop): Array<{ x0: number; x1: number; spans: Interval[] }> {
+function columnSlices(
+  ctx: WallContext,
+  x0: number,
+  x1: number,
+  bottom = ctx.bandBottom,
+  top = ctx.bandTop,
+): Array<{ x0: number; x1: number; spans: Interval[] }> {
   const edges = [x0, x1];
   for (const o of ctx.openings) {
     for (const e of [o.offset, o.offset + o.width]) if (e > x0 + 0.01 && e < x1 - 0.01) edges.push(e);
@@ -120,9 +124,7 @@ function columnCuts(slices: Array<{ spans: Interval[] }>): Interval[] {
 
 /** Horizontal stretches of the wall in the row [y0, y1] that no opening interrupts. */
 function rowIntervals(ctx: WallContext, y0: number, y1: number, x0 = 0, x1 = ctx.length): Interval[] {
-  const cuts = ctx.openings
-    .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, y0, y1) > 0.01)
-    .map((o) => [o.offset, o.offset + o.width] as const);
+  const cuts = ctx.openings.filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, y0, y1) > 0.01).map((o) => [o.offset, o.offset + o.width] as const);
   return subtractIntervals([x0, x1], cuts, MIN_PIECE);
 }
 
@@ -139,7 +141,8 @@ function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel'): void {
   for (const col of boardPositions(ctx.length, sheet.width, 0)) {
     const slices = columnSlices(ctx, col.start, col.start + col.width);
     for (const sl of slices) {
-      for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.width < sheet.width - 1e-6 });
+      for (const [y0, y1] of sl.spans)
+        ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.width < sheet.width - 1e-6 });
     }
     // A panel notched around an opening still comes from one piece of the sheet.
     for (const [y0, y1] of columnCuts(slices)) {
@@ -363,7 +366,9 @@ function wallTakeoff(
   }
 
   if (boards && boards.lastWidth < 1 && boards.count > 1) {
-    notes.push(`The last board on ${label} is ripped to ${formatLength(boards.lastWidth, units)}; splitting the difference between the first and last boards looks better (common practice).`);
+    notes.push(
+      `The last board on ${label} is ripped to ${formatLength(boards.lastWidth, units)}; splitting the difference between the first and last boards looks better (common practice).`,
+    );
   }
   if (boards && boards.leftover > 0) {
     notes.push(`${label} ends ${formatLength(boards.leftover, units)} short of a full gap; the corner trim hides it.`);
@@ -371,7 +376,9 @@ function wallTakeoff(
   if (ctx.joints > 0) {
     const moulding = t.kind === 'picture-frame' ? catalogue.mouldings.find((x) => x.id === t.mouldingId) : undefined;
     const longest = moulding ? Math.max(...stockLengthsOf(moulding).map((l) => l.length)) : 0;
-    notes.push(`Some frame sides on ${label} are longer than the longest moulding (${formatLength(longest, units)}), so they are joined: ${ctx.joints === 1 ? 'one scarf joint' : `${ctx.joints} scarf joints`}.`);
+    notes.push(
+      `Some frame sides on ${label} are longer than the longest moulding (${formatLength(longest, units)}), so they are joined: ${ctx.joints === 1 ? 'one scarf joint' : `${ctx.joints} scarf joints`}.`,
+    );
   }
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;

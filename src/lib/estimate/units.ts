@@ -37,12 +37,8 @@ const DEC = String.raw`(?:\d+(?:\.\d*)?|\.\d+)`;
 const MIXED = String.raw`(?:(\d+)[\s-]+(\d+)\s*\/\s*(\d+)|(\d+)\s*\/\s*(\d+)|(${DEC}))`;
 const FEET_UNIT = String.raw`(?:'|ft\.?|feet|foot)`;
 const INCH_UNIT = String.raw`(?:"|''|in\.?|inch|inches)`;
-const IMPERIAL_RE = new RegExp(
-  String.raw`^(?:(${DEC})\s*${FEET_UNIT})?\s*-?\s*(?:${MIXED}\s*(${INCH_UNIT})?)?$`,
-);
-const METRIC_RE = new RegExp(
-  String.raw`^(${DEC})\s*(mm|millimet(?:er|re)s?|cm|centimet(?:er|re)s?|m|met(?:er|re)s?)?$`,
-);
+const IMPERIAL_RE = new RegExp(String.raw`^(?:(${DEC})\s*${FEET_UNIT})?\s*-?\s*(?:${MIXED}\s*(${INCH_UNIT})?)?$`);
+const METRIC_RE = new RegExp(String.raw`^(${DEC})\s*(mm|millimet(?:er|re)s?|cm|centimet(?:er|re)s?|m|met(?:er|re)s?)?$`);
 
 function normalise(text: string): string {
   return text

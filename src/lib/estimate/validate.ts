@@ -32,14 +32,19 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
     const treatment = catalogue.treatments.find((t) => t.id === room.treatment.id);
     const offered = catalogue.treatments.filter((t) => t.enabled).map((t) => t.id);
     if (!treatment) bad(`${rp}.treatment.id`, `Unknown treatment "${room.treatment.id}"; this firm offers: ${offered.join(', ') || 'none'}.`);
-    else if (!treatment.enabled) bad(`${rp}.treatment.id`, `This firm does not offer "${treatment.name}" at the moment; it offers: ${offered.join(', ') || 'none'}.`);
+    else if (!treatment.enabled)
+      bad(`${rp}.treatment.id`, `This firm does not offer "${treatment.name}" at the moment; it offers: ${offered.join(', ') || 'none'}.`);
 
     if (room.treatment.height === 'wainscot') {
       const top = room.treatment.wainscotHeight ?? Math.round(room.ceilingHeight / 3);
       if (top >= room.ceilingHeight - 6) {
-        bad(`${rp}.treatment.wainscotHeight`, `Wainscot height (${fmt(top)}) must be at least 6 in below the ceiling (${fmt(room.ceilingHeight)}); choose full height instead.`);
+        bad(
+          `${rp}.treatment.wainscotHeight`,
+          `Wainscot height (${fmt(top)}) must be at least 6 in below the ceiling (${fmt(room.ceilingHeight)}); choose full height instead.`,
+        );
       }
-      if (top <= baseHeight + 6) bad(`${rp}.treatment.wainscotHeight`, `Wainscot height (${fmt(top)}) must be at least 6 in above the baseboard (${fmt(baseHeight)}).`);
+      if (top <= baseHeight + 6)
+        bad(`${rp}.treatment.wainscotHeight`, `Wainscot height (${fmt(top)}) must be at least 6 in above the baseboard (${fmt(baseHeight)}).`);
     } else if (room.treatment.wainscotHeight !== undefined) {
       bad(`${rp}.treatment.wainscotHeight`, 'Wainscot height only applies to a wainscot; leave it out for full height.');
     }
@@ -68,7 +73,8 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
         }
         if (o.offset !== undefined) {
           if (o.count > 1) bad(`${op}.offset`, 'A distance from the left end applies to one opening; give each counted opening its own entry.');
-          else if (o.offset + width > length + 1e-6) bad(`${op}.offset`, `The opening runs past the wall's end (${fmt(o.offset)} + ${fmt(width)} > ${fmt(length)}).`);
+          else if (o.offset + width > length + 1e-6)
+            bad(`${op}.offset`, `The opening runs past the wall's end (${fmt(o.offset)} + ${fmt(width)} > ${fmt(length)}).`);
           else fixed.push({ a: o.offset, b: o.offset + width, o: i });
         }
       });

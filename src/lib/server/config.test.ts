@@ -80,9 +80,11 @@ describe('checkEnvironment', () => {
   });
 
   test('the production rule is reported together with the other problems', () => {
-    expect(problems({ NODE_ENV: 'production' }).map((problem) => problem.split(' ')[0]).sort()).toEqual(
-      ['APP_SECRET', 'DATABASE_URL', 'PUBLIC_ORIGIN', 'S3_ACCESS_KEY_ID', 'S3_BUCKET', 'S3_SECRET_ACCESS_KEY', 'SMTP_URL'].sort(),
-    );
+    expect(
+      problems({ NODE_ENV: 'production' })
+        .map((problem) => problem.split(' ')[0])
+        .sort(),
+    ).toEqual(['APP_SECRET', 'DATABASE_URL', 'PUBLIC_ORIGIN', 'S3_ACCESS_KEY_ID', 'S3_BUCKET', 'S3_SECRET_ACCESS_KEY', 'SMTP_URL'].sort());
   });
 });
 
@@ -108,6 +110,13 @@ describe('config getters', () => {
     vi.stubEnv('S3_BUCKET', 'lapwing-photos');
     vi.stubEnv('S3_ACCESS_KEY_ID', 'key');
     vi.stubEnv('S3_SECRET_ACCESS_KEY', 'secret');
-    expect(config.s3).toEqual({ endpoint: undefined, region: expect.any(String), bucket: 'lapwing-photos', accessKeyId: 'key', secretAccessKey: 'secret', forcePathStyle: false });
+    expect(config.s3).toEqual({
+      endpoint: undefined,
+      region: expect.any(String),
+      bucket: 'lapwing-photos',
+      accessKeyId: 'key',
+      secretAccessKey: 'secret',
+      forcePathStyle: false,
+    });
   });
 });

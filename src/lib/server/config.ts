@@ -22,8 +22,7 @@ function hasProtocol(value: string, protocols: string[]): boolean {
 }
 
 const text = (what = 'text') => z.string({ error: (issue) => (issue.input === undefined ? 'is not set' : `must be ${what}`) });
-const urlOf = (protocols: string[], example: string) =>
-  text().refine((value) => hasProtocol(value, protocols), `must be a URL like ${example}`);
+const urlOf = (protocols: string[], example: string) => text().refine((value) => hasProtocol(value, protocols), `must be a URL like ${example}`);
 const flag = z.enum(['true', 'false'], { error: 'must be true or false' });
 
 const variables = {
@@ -55,7 +54,12 @@ const variables = {
     .default('info'),
   /** Where scripts/serve.mjs listens, and whether it believes X-Forwarded-For. */
   HOST: text().min(1).default('127.0.0.1'),
-  PORT: z.coerce.number({ error: 'must be a port number' }).int('must be a port number').min(1, 'must be a port number').max(65535, 'must be a port number').default(4321),
+  PORT: z.coerce
+    .number({ error: 'must be a port number' })
+    .int('must be a port number')
+    .min(1, 'must be a port number')
+    .max(65535, 'must be a port number')
+    .default(4321),
   TRUST_PROXY: flag.default('false'),
 };
 

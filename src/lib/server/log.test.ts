@@ -27,7 +27,7 @@ describe('the server log', () => {
     });
   });
 
-  test('lines are JSON with pino\'s numeric levels', () => {
+  test("lines are JSON with pino's numeric levels", () => {
     // Source: pino documentation, "API: logger.level" (trace 10, debug 20, info 30, warn 40, error 50, fatal 60).
     const { logger, lines } = capture();
     logger.debug('not written at info');

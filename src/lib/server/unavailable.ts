@@ -17,11 +17,7 @@ const CONNECTION_CLASS = '08';
 const SOCKET_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH', 'EAI_AGAIN']);
 
 // What node-postgres and knex say when a connection is lost or none can be had; these errors carry no code.
-const LOST_CONNECTION = [
-  /^Connection terminated/,
-  /^Client has encountered a connection error and is not queryable/,
-  /^Knex: Timeout acquiring a connection/,
-];
+const LOST_CONNECTION = [/^Connection terminated/, /^Client has encountered a connection error and is not queryable/, /^Knex: Timeout acquiring a connection/];
 
 function isOutageItself(error: unknown): boolean {
   if (!error || typeof error !== 'object') return false;

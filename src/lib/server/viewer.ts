@@ -28,11 +28,7 @@ export function roleInFirm(viewer: Viewer, roles: readonly StaffRole[], target?:
  * Presents what the viewer may do with one object as a map of plain booleans, for islands to
  * decide which controls to offer (the server still checks each action when it is asked).
  */
-export function allowedActions<T extends FirmScoped, K extends string>(
-  viewer: Viewer,
-  target: T,
-  policies: Record<K, ObjectPolicy<T>>,
-): Record<K, boolean> {
+export function allowedActions<T extends FirmScoped, K extends string>(viewer: Viewer, target: T, policies: Record<K, ObjectPolicy<T>>): Record<K, boolean> {
   const actions = {} as Record<K, boolean>;
   for (const action of Object.keys(policies) as K[]) actions[action] = policies[action](viewer, target);
   return actions;

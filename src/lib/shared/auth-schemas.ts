@@ -41,7 +41,10 @@ export const signInSchema = z.strictObject({
 
 const passwordPair = {
   password: newPasswordSchema,
-  confirm: z.string({ error: 'Type the password again.' }).min(1, { error: 'Type the password again.' }).max(PASSWORD_MAX, { error: 'The two passwords differ.' }),
+  confirm: z
+    .string({ error: 'Type the password again.' })
+    .min(1, { error: 'Type the password again.' })
+    .max(PASSWORD_MAX, { error: 'The two passwords differ.' }),
 };
 
 function samePasswords(value: { password: string; confirm: string }, ctx: z.RefinementCtx): void {
@@ -64,9 +67,7 @@ export const resetRequestSchema = z.strictObject({ email: emailSchema });
 
 export const resetPasswordSchema = z.strictObject(passwordPair).superRefine(samePasswords);
 
-export const changePasswordSchema = z
-  .strictObject({ currentPassword: currentPasswordSchema, ...passwordPair })
-  .superRefine(samePasswords);
+export const changePasswordSchema = z.strictObject({ currentPassword: currentPasswordSchema, ...passwordPair }).superRefine(samePasswords);
 
 const roleSchema = z.enum(STAFF_ROLES, { error: 'Choose Owner or Sales.' });
 

@@ -67,9 +67,7 @@ export const estimateRequestSchema = z.strictObject({
 export const leadRequestSchema = z.strictObject({
   formToken: z.string({ error: 'The form token is missing; reload the page.' }).min(10).max(600),
   /** Chosen by the browser once per send attempt series; the same key twice makes one lead. */
-  idempotencyKey: z
-    .string({ error: 'The request key is missing.' })
-    .regex(/^[A-Za-z0-9_-]{16,64}$/, { error: 'The request key is malformed.' }),
+  idempotencyKey: z.string({ error: 'The request key is missing.' }).regex(/^[A-Za-z0-9_-]{16,64}$/, { error: 'The request key is malformed.' }),
   project: projectSchema,
   contact: contactSchema,
   /** A field people never see; software that fills every field fills this one. */

@@ -28,10 +28,7 @@ const formToken = z.string({ error: 'The form token is missing; reload the page.
 export const photoUploadRequestSchema = z.strictObject({
   formToken,
   /** The homeowner's file name, shown back to them only; storage keys never use it. */
-  name: z
-    .string({ error: 'The file name is missing.' })
-    .max(1000, { error: 'The file name is too long.' })
-    .transform(displayName),
+  name: z.string({ error: 'The file name is missing.' }).max(1000, { error: 'The file name is too long.' }).transform(displayName),
   size: z
     .number({ error: 'The file size is missing.' })
     .int({ error: 'The file size must be a whole number of bytes.' })
@@ -47,7 +44,6 @@ export type PhotoUploadRequest = z.input<typeof photoUploadRequestSchema>;
 
 /** Body of POST …/photos/ID/complete and DELETE …/photos/ID. */
 export const photoFormTokenSchema = z.strictObject({ formToken });
-
 
 /**
  * A file name fit for display: no folders, no control characters, at most 120 characters

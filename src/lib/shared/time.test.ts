@@ -39,7 +39,8 @@ describe('daylight saving time', () => {
     expect(isoInZone('2026-03-08T08:00:00Z', CHICAGO)).toBe('2026-03-08T03:00:00-05:00');
     const start = Date.parse('2026-03-08T06:00:00Z');
     const hours = new Set<string>();
-    for (let minute = 0; minute < 4 * 60; minute++) hours.add(formatInZone(start + minute * 60_000, CHICAGO, 'dateTime').replace(/^.*, (\d+):\d\d (AM|PM)$/, '$1 $2'));
+    for (let minute = 0; minute < 4 * 60; minute++)
+      hours.add(formatInZone(start + minute * 60_000, CHICAGO, 'dateTime').replace(/^.*, (\d+):\d\d (AM|PM)$/, '$1 $2'));
     expect([...hours]).toEqual(['12 AM', '1 AM', '3 AM', '4 AM']);
   });
 

@@ -12,7 +12,14 @@ export async function formTokenFor(request: APIRequestContext, slug: string): Pr
 
 export const twoRoomProject = {
   rooms: [
-    { name: 'Dining room', ceilingHeight: 96, length: 156, width: 132, walls: [{ side: 'length' }, { side: 'width', openings: [{ kind: 'door' }] }], treatment: { id: 'board-and-batten', height: 'wainscot' } },
+    {
+      name: 'Dining room',
+      ceilingHeight: 96,
+      length: 156,
+      width: 132,
+      walls: [{ side: 'length' }, { side: 'width', openings: [{ kind: 'door' }] }],
+      treatment: { id: 'board-and-batten', height: 'wainscot' },
+    },
     { name: 'Hallway', ceilingHeight: 96, walls: [{ length: 150, outlets: 1 }], treatment: { id: 'board-and-batten', height: 'wainscot' } },
   ],
   builtBefore1978: 'no',

@@ -22,10 +22,7 @@ export const csrf = defineMiddleware((context, next) => {
   const origin = request.headers.get('origin');
   const ours = origin !== null && (origin === config.publicOrigin || origin === url.origin);
   if ((fetchSite && fetchSite !== 'same-origin' && fetchSite !== 'none') || !ours) {
-    return Response.json(
-      { error: 'This request did not come from a Lapwing page, so it was refused. Reload the page and try again.' },
-      { status: 403 },
-    );
+    return Response.json({ error: 'This request did not come from a Lapwing page, so it was refused. Reload the page and try again.' }, { status: 403 });
   }
   return next();
 });

@@ -51,10 +51,12 @@ export class MikroOrmSessionAdapter implements Adapter {
 
   async updateSessionExpiration(sessionId: string, expiresAt: Date): Promise<void> {
     const em = await this.openEm();
-    await em.getConnection().execute(
-      'update "user_session" set "expires_at" = least(?::timestamptz, "absolute_expires_at"), "updated_at" = now() where "token_digest" = ?',
-      [expiresAt.toISOString(), sessionTokenDigest(sessionId)],
-    );
+    await em
+      .getConnection()
+      .execute('update "user_session" set "expires_at" = least(?::timestamptz, "absolute_expires_at"), "updated_at" = now() where "token_digest" = ?', [
+        expiresAt.toISOString(),
+        sessionTokenDigest(sessionId),
+      ]);
   }
 
   async deleteSession(sessionId: string): Promise<void> {

@@ -48,7 +48,11 @@ async function sendResetLinkIfAccount(em: EntityManager, email: string): Promise
   if ((await perEmail.used(email)) >= 3) return;
   await perEmail.consume(email, 'unused: checked above');
   const token = newLinkToken();
-  const reset = em.create(PasswordReset, { user, tokenDigest: linkTokenDigest('password-reset', token), expiresAt: new Date(now().getTime() + RESET_LIFETIME_MS) });
+  const reset = em.create(PasswordReset, {
+    user,
+    tokenDigest: linkTokenDigest('password-reset', token),
+    expiresAt: new Date(now().getTime() + RESET_LIFETIME_MS),
+  });
   const mail = passwordResetMail({ name: user.name, token, expiresAt: reset.expiresAt, timeZone: await timeZoneOfUser(em, user.id) });
   enqueueMail(em, { to: user.email, subject: mail.subject, text: mail.text });
   await em.flush();

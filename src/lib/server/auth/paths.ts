@@ -38,7 +38,10 @@ export function canonicalPath(pathname: string): string {
     const char = String.fromCharCode(parseInt(hex, 16));
     return UNRESERVED.test(char) ? char : escape;
   });
-  const segments = decoded.replace(/\/{2,}/g, '/').split('/').slice(1);
+  const segments = decoded
+    .replace(/\/{2,}/g, '/')
+    .split('/')
+    .slice(1);
   const kept: string[] = [];
   segments.forEach((segment, index) => {
     const last = index === segments.length - 1;

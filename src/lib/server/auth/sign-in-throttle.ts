@@ -25,7 +25,8 @@ function minutes(seconds: number): string {
 /** Throws TooManyRequests when this account or address is refused right now; otherwise waits as long as earlier failures ask. */
 export async function beforeSignInAttempt(email: string, address: string): Promise<void> {
   const [accountWait, addressWait] = await Promise.all([perAccount.refusedFor(email), perAddress.refusedFor(address)]);
-  if (accountWait) throw new TooManyRequests(`Too many failed sign-ins for this account. Try again in ${minutes(accountWait)}, or reset your password.`, accountWait);
+  if (accountWait)
+    throw new TooManyRequests(`Too many failed sign-ins for this account. Try again in ${minutes(accountWait)}, or reset your password.`, accountWait);
   if (addressWait) throw new TooManyRequests(`Too many failed sign-ins from your network. Try again in ${minutes(addressWait)}.`, addressWait);
   const wait = slowDownMs(await perAccount.used(email));
   if (wait > 0) await slowDown.wait(wait);

@@ -34,6 +34,7 @@ export async function checkSignIn(
   }
   await afterSuccessfulSignIn(email);
   const first = await em.findOne(Membership, { user }, { populate: ['company'], orderBy: { company: { name: 'asc' } } });
-  if (!first) throw new InvalidInput('This sign-in is not on any firm’s team any more. Ask the firm’s owner to invite you again.', { email: 'Not on any team.' });
+  if (!first)
+    throw new InvalidInput('This sign-in is not on any firm’s team any more. Ask the firm’s owner to invite you again.', { email: 'Not on any team.' });
   return { userId: user.id, companyId: first.company.id };
 }

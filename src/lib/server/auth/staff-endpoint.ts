@@ -8,10 +8,7 @@ import { requireStaff, type Staff, type ViewerPolicy } from './guard';
  *
  *   export const GET = staffEndpoint({ may: canManageTeam }, ({ staff, locals }) => ...);
  */
-export function staffEndpoint(
-  options: { may?: ViewerPolicy },
-  handler: (context: APIContext & { staff: Staff }) => Promise<Response> | Response,
-): APIRoute {
+export function staffEndpoint(options: { may?: ViewerPolicy }, handler: (context: APIContext & { staff: Staff }) => Promise<Response> | Response): APIRoute {
   return async (context) => {
     try {
       const staff = requireStaff(context.locals, options);

@@ -43,10 +43,7 @@ export function backgroundEntry() {
     hooks: {
       'astro:build:setup': ({ vite, target }) => {
         if (target !== 'server') return;
-        vite.plugins = [
-          ...(vite.plugins ?? []),
-          { name: 'lapwing-background-entry', options: (options) => ({ ...options, input: withEntry(options.input) }) },
-        ];
+        vite.plugins = [...(vite.plugins ?? []), { name: 'lapwing-background-entry', options: (options) => ({ ...options, input: withEntry(options.input) }) }];
       },
       'astro:server:setup': ({ server }) => {
         devServer = server;

@@ -4,10 +4,7 @@ import { provideOrm } from '../db/orm-provider';
 
 // Vite bundles the migrations into the server, because the migrator's own file loading uses a
 // native import() of .ts files that only works under tsx (the CLI), not in the built app or vitest.
-const migrationModules = import.meta.glob<Record<string, new (...args: never[]) => Migration>>(
-  '../../../../migrations/Migration*.ts',
-  { eager: true },
-);
+const migrationModules = import.meta.glob<Record<string, new (...args: never[]) => Migration>>('../../../../migrations/Migration*.ts', { eager: true });
 
 export const migrationsList = Object.entries(migrationModules)
   .map(([file, module]) => {

@@ -11,8 +11,50 @@ import { newLeadReference } from '../leads/lead-reference';
 import type { LeadStage } from '~/lib/shared/labels';
 import type { RateBookVersion } from '../rates/rate-book-version.entity';
 
-const FIRST = ['Maya', 'Jonah', 'Priya', 'Elliot', 'Rosa', 'Dev', 'Hannah', 'Tomas', 'Grace', 'Omar', 'Leah', 'Wes', 'Ines', 'Caleb', 'Noor', 'Felix', 'June', 'Arlo', 'Tess', 'Ravi'];
-const LAST = ['Pike', 'Alder', 'Quill', 'Hartwell', 'Osei', 'Lund', 'Marsh', 'Castillo', 'Brandt', 'Yoon', 'Farrow', 'Nakamura', 'Doyle', 'Ibarra', 'Kessler', 'Moreau', 'Sato', 'Whitlock', 'Varga', 'Ellery'];
+const FIRST = [
+  'Maya',
+  'Jonah',
+  'Priya',
+  'Elliot',
+  'Rosa',
+  'Dev',
+  'Hannah',
+  'Tomas',
+  'Grace',
+  'Omar',
+  'Leah',
+  'Wes',
+  'Ines',
+  'Caleb',
+  'Noor',
+  'Felix',
+  'June',
+  'Arlo',
+  'Tess',
+  'Ravi',
+];
+const LAST = [
+  'Pike',
+  'Alder',
+  'Quill',
+  'Hartwell',
+  'Osei',
+  'Lund',
+  'Marsh',
+  'Castillo',
+  'Brandt',
+  'Yoon',
+  'Farrow',
+  'Nakamura',
+  'Doyle',
+  'Ibarra',
+  'Kessler',
+  'Moreau',
+  'Sato',
+  'Whitlock',
+  'Varga',
+  'Ellery',
+];
 const STREETS = ['Juniper Bend', 'Millrace Lane', 'Copper Hollow Rd', 'Larkspur Ct', 'Old Quarry Way', 'Tanager St', 'Fieldstone Dr', 'Bramble Row'];
 const ROOMS: { name: string; length: number; width: number; damp?: boolean }[] = [
   { name: 'Dining room', length: 156, width: 132 },

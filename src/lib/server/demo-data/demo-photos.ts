@@ -10,7 +10,10 @@ import { cleanPhoto } from '../photos/photo-content';
 import { putObject } from '../storage/s3';
 
 function wallPicture(tone: string, boards: number): Buffer {
-  const lines = Array.from({ length: boards }, (_, i) => `<line x1="${(i + 1) * (1200 / (boards + 1))}" y1="380" x2="${(i + 1) * (1200 / (boards + 1))}" y2="900" stroke="#6E5A3E" stroke-width="4"/>`).join('');
+  const lines = Array.from(
+    { length: boards },
+    (_, i) => `<line x1="${(i + 1) * (1200 / (boards + 1))}" y1="380" x2="${(i + 1) * (1200 / (boards + 1))}" y2="900" stroke="#6E5A3E" stroke-width="4"/>`,
+  ).join('');
   return Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" width="1200" height="900">
     <rect width="1200" height="900" fill="#F3EFE6"/>
     <rect x="0" y="380" width="1200" height="520" fill="${tone}"/>${lines}
@@ -27,7 +30,9 @@ export async function seedDemoPhotos(em: EntityManager, company: Company): Promi
   let added = 0;
   for (const [index, lead] of leads.entries()) {
     for (const [n, tone] of ['#E8D3AC', '#F7F3EA'].entries()) {
-      const png = await sharp(wallPicture(tone, 6 + index * 3 + n)).png().toBuffer();
+      const png = await sharp(wallPicture(tone, 6 + index * 3 + n))
+        .png()
+        .toBuffer();
       const clean = await cleanPhoto(png);
       const id = randomUUID();
       const imageKey = `photos/${company.id}/${id}.jpg`;

@@ -98,7 +98,14 @@ export async function seedDemo(em: EntityManager): Promise<string> {
     let published = await em.findOne(RateBookVersion, { company, status: 'published' });
     const rates = firm.rates(sampleRateBook());
     if (!published) {
-      published = em.create(RateBookVersion, { company, number: 1, status: 'published', data: storedRateBook.wrap(rates), note: 'Starting rates', publishedAt: new Date() });
+      published = em.create(RateBookVersion, {
+        company,
+        number: 1,
+        status: 'published',
+        data: storedRateBook.wrap(rates),
+        note: 'Starting rates',
+        publishedAt: new Date(),
+      });
       // A draft the owner is still working on: labour up five per cent.
       const draft = { ...rates, labour: { ...rates.labour, rateCents: Math.round(rates.labour.rateCents * 1.05) } };
       em.create(RateBookVersion, { company, number: 2, status: 'draft', data: storedRateBook.wrap(draft), note: 'Spring prices (draft)' });

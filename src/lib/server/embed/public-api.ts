@@ -28,7 +28,10 @@ export function publicEndpoint(name: string, limits: Limits, handler: (call: Pub
       const company = await companyBySlug(context.locals.em, context.params.slug ?? '');
       cors = corsHeaders(context.request, company);
       if (isForeignOrigin(context.request, company)) throw new AppError('This site is not allowed to use the estimate form.', 403);
-      await perAddress.consume(`${company.id}:${context.clientAddress}`, limits.messages?.perAddress ?? 'Too many requests from your network. Please wait a minute and try again.');
+      await perAddress.consume(
+        `${company.id}:${context.clientAddress}`,
+        limits.messages?.perAddress ?? 'Too many requests from your network. Please wait a minute and try again.',
+      );
       await perFirm.consume(company.id, limits.messages?.perFirm ?? 'This form is very busy right now. Please try again in a few minutes.');
       const { status, body } = await handler({ em: context.locals.em, company, request: context.request, params: context.params });
       return body === undefined ? new Response(null, { status, headers: cors }) : Response.json(body, { status, headers: cors });

@@ -8,7 +8,16 @@ export function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
 }
 
-type LeadFacts = { reference: string; name: string; email: string; phone: string; address: string; postcode: string; preferredContact: string; message: string | null };
+type LeadFacts = {
+  reference: string;
+  name: string;
+  email: string;
+  phone: string;
+  address: string;
+  postcode: string;
+  preferredContact: string;
+  message: string | null;
+};
 
 function cautionLines(view: HomeownerEstimate): string[] {
   return view.cautions.map((c) => `- ${c.title}: ${c.text}`);
@@ -17,7 +26,9 @@ function cautionLines(view: HomeownerEstimate): string[] {
 /** The homeowner's confirmation: the range, how it adds up, cautions, and a private link. */
 export function homeownerConfirmation(company: Company, lead: LeadFacts, view: HomeownerEstimate, viewUrl: string) {
   const money = (cents: number) => formatMoney(cents, view.currency, view.locale, { wholeUnits: true });
-  const rooms = view.rooms.map((r) => `- ${r.name}: ${r.treatmentName}, ${r.height === 'full' ? 'full height' : 'wainscot height'}, about ${Math.round(r.netSqFt)} sq ft`);
+  const rooms = view.rooms.map(
+    (r) => `- ${r.name}: ${r.treatmentName}, ${r.height === 'full' ? 'full height' : 'wainscot height'}, about ${Math.round(r.netSqFt)} sq ft`,
+  );
   const groups = view.groups.map((g) => `- ${g.label}: about ${money(g.cents)}`);
   const text = [
     `Hello ${lead.name},`,

@@ -3,7 +3,6 @@ import { isId } from '~/lib/shared/ids';
 import { NotFound } from '../errors';
 import { Lead } from './lead.entity';
 
-
 /** One of the firm's leads; another firm's id or a malformed one is simply not found. */
 export async function leadOfCompany(em: EntityManager, companyId: string, leadId: string): Promise<Lead> {
   if (!isId(leadId)) throw new NotFound('No such lead.');

@@ -85,8 +85,18 @@ export async function deliverDueMail(
       const claim = await claimNext(em.fork(), now(), claimMs, only);
       if (!claim) return;
       result.claimed += 1;
-      const message = { to: claim.toAddress, subject: claim.subject, text: claim.textBody, html: claim.htmlBody ?? undefined, replyTo: claim.replyTo ?? undefined, messageId: claim.messageId! };
-      const outcome = await withTimeout(Promise.resolve().then(() => send(message)), timeoutMs).then(
+      const message = {
+        to: claim.toAddress,
+        subject: claim.subject,
+        text: claim.textBody,
+        html: claim.htmlBody ?? undefined,
+        replyTo: claim.replyTo ?? undefined,
+        messageId: claim.messageId!,
+      };
+      const outcome = await withTimeout(
+        Promise.resolve().then(() => send(message)),
+        timeoutMs,
+      ).then(
         () => ({ ok: true as const }),
         (error: unknown) => ({ ok: false as const, error }),
       );
@@ -112,13 +122,18 @@ export async function nextMailDueAt(em: EntityManager): Promise<Date | null> {
 
 /** Takes the oldest due message (or one whose claim has lapsed) for this pass, in its own short transaction. */
 async function claimNext(em: EntityManager, now: Date, claimMs: number, only?: FilterQuery<OutboxMail>): Promise<OutboxMail | null> {
-  const due: FilterQuery<OutboxMail> = { $or: [{ status: 'queued', nextAttemptAt: { $lte: now } }, { status: 'sending', claimedUntil: { $lt: now } }] };
+  const due: FilterQuery<OutboxMail> = {
+    $or: [
+      { status: 'queued', nextAttemptAt: { $lte: now } },
+      { status: 'sending', claimedUntil: { $lt: now } },
+    ],
+  };
   return em.transactional(async (tx) => {
-    const [mail] = await tx.find(
-      OutboxMail,
-      only ? { $and: [due, only] } : due,
-      { orderBy: { createdAt: 'asc' }, limit: 1, lockMode: LockMode.PESSIMISTIC_PARTIAL_WRITE },
-    );
+    const [mail] = await tx.find(OutboxMail, only ? { $and: [due, only] } : due, {
+      orderBy: { createdAt: 'asc' },
+      limit: 1,
+      lockMode: LockMode.PESSIMISTIC_PARTIAL_WRITE,
+    });
     if (!mail) return null;
     mail.status = 'sending';
     mail.attempts += 1;

@@ -90,11 +90,7 @@ export async function requestUpload(em: EntityManager, request: UploadRequest, n
 }
 
 function findDraftPhoto(em: EntityManager, { companyId, draftId }: DraftRef, photoId: string, lock = false): Promise<LeadPhoto | null> {
-  return em.findOne(
-    LeadPhoto,
-    { id: photoId, company: companyId, draftId },
-    lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {},
-  );
+  return em.findOne(LeadPhoto, { id: photoId, company: companyId, draftId }, lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {});
 }
 
 /**
@@ -162,7 +158,9 @@ export async function completeUpload(em: EntityManager, ref: PhotoRef, now = Dat
       verdict = await inspectUpload(ref, step.uploadKey);
     } catch (error) {
       // Storage trouble: let go of the claim so the homeowner can try again at once.
-      await em.fork().nativeUpdate(LeadPhoto, { id: ref.photoId, status: 'checking', checkingUntil: step.checkingUntil }, { status: 'pending', checkingUntil: null });
+      await em
+        .fork()
+        .nativeUpdate(LeadPhoto, { id: ref.photoId, status: 'checking', checkingUntil: step.checkingUntil }, { status: 'pending', checkingUntil: null });
       throw error;
     }
     const recorded = await recordCheck(em.fork(), ref, step, verdict);
@@ -247,7 +245,14 @@ async function recordCheck(em: EntityManager, ref: PhotoRef, claim: { checkingUn
     } else if (verdict.kind === 'refused') {
       Object.assign(photo, { status: 'refused', refusal: verdict.refusal });
     } else {
-      Object.assign(photo, { status: 'ready', imageKey: verdict.imageKey, thumbKey: verdict.thumbKey, width: verdict.width, height: verdict.height, bytes: verdict.bytes });
+      Object.assign(photo, {
+        status: 'ready',
+        imageKey: verdict.imageKey,
+        thumbKey: verdict.thumbKey,
+        width: verdict.width,
+        height: verdict.height,
+        bytes: verdict.bytes,
+      });
       // The homeowner may have sent the form while this photo was still on its way.
       const sentLead = await tx.findOne(Lead, { company: ref.companyId, draftId: ref.draftId });
       if (sentLead) photo.lead = sentLead;
@@ -282,10 +287,7 @@ export async function removePhoto(em: EntityManager, ref: PhotoRef): Promise<voi
  * the photos (the unit of work orders the inserts by the foreign key). Returns the attached photos.
  * Photos still being checked when the lead is sent are attached by completeUpload when they finish.
  */
-export async function attachDraftPhotos(
-  em: EntityManager,
-  { companyId, draftId, lead }: DraftRef & { lead: Lead },
-): Promise<LeadPhoto[]> {
+export async function attachDraftPhotos(em: EntityManager, { companyId, draftId, lead }: DraftRef & { lead: Lead }): Promise<LeadPhoto[]> {
   const photos = await em.find(LeadPhoto, { company: companyId, draftId, status: 'ready', lead: null }, { orderBy: { createdAt: 'asc' } });
   for (const photo of photos) photo.lead = lead;
   return photos;

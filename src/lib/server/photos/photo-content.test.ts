@@ -53,7 +53,10 @@ describe('sniffPhotoType: the type comes from the leading bytes', () => {
 
 describe('cleanPhoto', () => {
   test('keeps no EXIF, shrinks to a 2,000 px long edge and makes a 400 px thumbnail', async () => {
-    const input = await solid(2400, 1200).withExif({ IFD0: { Make: 'SomeCamera', Copyright: 'someone' } }).jpeg().toBuffer();
+    const input = await solid(2400, 1200)
+      .withExif({ IFD0: { Make: 'SomeCamera', Copyright: 'someone' } })
+      .jpeg()
+      .toBuffer();
     expect((await sharp(input).metadata()).exif).toBeDefined();
     const clean = await cleanPhoto(input);
     expect(clean).toMatchObject({ width: 2000, height: 1000 });
@@ -84,7 +87,9 @@ describe('cleanPhoto', () => {
     expect(await refusal(padded(Buffer.from([0xff, 0xd8, 0xff, 0xe0]), 2048))).toBe(REFUSALS.damaged);
     // One pixel over the cap, in a PNG that is tiny on disk.
     const width = 8000;
-    const overCap = await solid(width, Math.floor(MAX_INPUT_PIXELS / width) + 1).png().toBuffer();
+    const overCap = await solid(width, Math.floor(MAX_INPUT_PIXELS / width) + 1)
+      .png()
+      .toBuffer();
     expect(await refusal(overCap)).toBe(REFUSALS.tooManyPixels);
   });
 });

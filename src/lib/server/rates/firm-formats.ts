@@ -18,7 +18,8 @@ export const UNPUBLISHED_FORMATS = { units: 'imperial', currency: 'USD', locale:
  */
 export async function firmFormats(em: EntityManager, company: Company | string): Promise<Formats> {
   // An id, or a reference that was never loaded: read the firm itself.
-  const firm = typeof company === 'string' || !company.timeZone ? await em.findOneOrFail(Company, { id: typeof company === 'string' ? company : company.id }) : company;
+  const firm =
+    typeof company === 'string' || !company.timeZone ? await em.findOneOrFail(Company, { id: typeof company === 'string' ? company : company.id }) : company;
   const published = await publishedRatesIfAny(em, firm.id);
   const { units, currency, locale } = published?.rateBook ?? UNPUBLISHED_FORMATS;
   return formatsFor({ timeZone: firm.timeZone, units, currency, locale });

@@ -2,14 +2,7 @@
  * The one door to object storage (S3, or the local s3rver stand-in). Everything else calls these
  * functions with keys and buffers and never sees the SDK.
  */
-import {
-  DeleteObjectCommand,
-  GetObjectCommand,
-  HeadObjectCommand,
-  PutObjectCommand,
-  S3Client,
-  S3ServiceException,
-} from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
 import { createPresignedPost } from '@aws-sdk/s3-presigned-post';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { config } from '../config';
@@ -38,10 +31,7 @@ function bucket(): string {
 }
 
 function isMissing(error: unknown): boolean {
-  return (
-    error instanceof S3ServiceException &&
-    (error.name === 'NotFound' || error.name === 'NoSuchKey' || error.$metadata.httpStatusCode === 404)
-  );
+  return error instanceof S3ServiceException && (error.name === 'NotFound' || error.name === 'NoSuchKey' || error.$metadata.httpStatusCode === 404);
 }
 
 /** The object is no longer the version asked for (If-Match), or shrank below the range asked for. */

@@ -7,9 +7,7 @@ import { User } from '../users/user.entity';
 import { linkTokenDigest, looksLikeLinkToken } from '../auth/tokens';
 import { Invite } from './invite.entity';
 
-export type InviteView =
-  | { state: 'open'; firmName: string; email: string; role: Role; hasAccount: boolean }
-  | { state: 'expired' | 'used' | 'unknown' };
+export type InviteView = { state: 'open'; firmName: string; email: string; role: Role; hasAccount: boolean } | { state: 'expired' | 'used' | 'unknown' };
 
 export const LINK_PROBLEMS = {
   unknown: 'This invitation link is not valid. Check that the whole link was copied, or ask the owner for a new one.',
@@ -47,11 +45,7 @@ export async function acceptInvite(
     const invite = await findByToken(tx, token);
     if (!invite) throw new InvalidInput(LINK_PROBLEMS.unknown);
     const at = now();
-    const spent = await tx.nativeUpdate(
-      Invite,
-      { id: invite.id, acceptedAt: null, expiresAt: { $gt: at } },
-      { acceptedAt: at },
-    );
+    const spent = await tx.nativeUpdate(Invite, { id: invite.id, acceptedAt: null, expiresAt: { $gt: at } }, { acceptedAt: at });
     if (spent !== 1) throw new InvalidInput(invite.acceptedAt ? LINK_PROBLEMS.used : invite.expiresAt <= at ? LINK_PROBLEMS.expired : LINK_PROBLEMS.used);
 
     let user = await tx.findOne(User, { email: invite.email }, { populate: ['passwordHash'] });

@@ -34,10 +34,7 @@ export async function listTeam(em: EntityManager, companyId: string): Promise<{ 
  * Invites a person by e-mail. A newer invitation to the same address replaces an open one.
  * The e-mail is queued in the same transaction; its link carries a token stored only as a digest.
  */
-export async function inviteToTeam(
-  em: EntityManager,
-  input: { companyId: string; invitedById: string; email: string; role: Role },
-): Promise<PendingInvite> {
+export async function inviteToTeam(em: EntityManager, input: { companyId: string; invitedById: string; email: string; role: Role }): Promise<PendingInvite> {
   const company = await em.findOneOrFail(Company, { id: input.companyId });
   const already = await em.count(Membership, { company, user: { email: input.email } });
   if (already) throw new Conflict('This person is already on the team.', { email: 'Already on the team.' });
@@ -53,7 +50,14 @@ export async function inviteToTeam(
     invitedBy: inviter,
     expiresAt: new Date(now().getTime() + INVITE_LIFETIME_MS),
   });
-  const mail = inviteMail({ firmName: company.name, inviterName: inviter?.name ?? null, role: input.role, token, expiresAt: invite.expiresAt, timeZone: company.timeZone });
+  const mail = inviteMail({
+    firmName: company.name,
+    inviterName: inviter?.name ?? null,
+    role: input.role,
+    token,
+    expiresAt: invite.expiresAt,
+    timeZone: company.timeZone,
+  });
   enqueueMail(em, { to: input.email, subject: mail.subject, text: mail.text, companyId: company.id });
   await em.flush();
   return { id: invite.id, email: invite.email, role: invite.role, expiresAt: invite.expiresAt.toISOString() };
