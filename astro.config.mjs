@@ -6,12 +6,11 @@ import tailwind from '@astrojs/tailwind';
 import { widgetLoader } from './widget/integration.mjs';
 import { estimateWorker } from './src/lib/server/estimates/worker-bundle.ts';
 import { backgroundEntry } from './src/lib/server/boot/background-integration.mjs';
-import { configCheck } from './scripts/lib/config-check.mjs';
 
 export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react(), tailwind({ applyBaseStyles: false }), widgetLoader(), configCheck(), estimateWorker(), backgroundEntry()],
+  integrations: [react(), tailwind({ applyBaseStyles: false }), widgetLoader(), estimateWorker(), backgroundEntry()],
   // The standalone server reads HOST and PORT at run time; these are the defaults.
   server: { host: '127.0.0.1', port: 4321 },
   // Without a trusted host list Astro 5 sees every request as http://localhost, and its own

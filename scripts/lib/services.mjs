@@ -114,7 +114,7 @@ function newestMtime(target) {
 /** Builds the production server when any of its inputs is newer than the last build. */
 export function buildIfNeeded(env, { force = false } = {}) {
   const entry = path.join(root, 'dist', 'server', 'entry.mjs');
-  const inputs = ['src', 'public', 'widget', 'migrations', 'astro.config.mjs', 'tailwind.config.mjs', 'package-lock.json', 'scripts/lib/config-check.mjs'];
+  const inputs = ['src', 'public', 'widget', 'migrations', 'astro.config.mjs', 'tailwind.config.mjs', 'package-lock.json'];
   const builtAt = existsSync(entry) ? statSync(entry).mtimeMs : 0;
   if (!force && builtAt > Math.max(...inputs.map((input) => newestMtime(path.join(root, input))))) return;
   log('Building the app (astro build)…');

@@ -6,8 +6,8 @@
  * deployment stops at start with one message naming every bad variable). The `config.*` getters
  * each check only the variables they read, so a tool that needs the database alone runs without mail.
  *
- * This module imports nothing but zod: the build also compiles it on its own for scripts/serve.mjs
- * (see scripts/lib/config-check.mjs).
+ * This module imports nothing but zod: scripts/serve.mjs checks the settings with it before it loads
+ * the app, through an entry of its own in the server build (src/lib/server/boot/config-check.ts).
  */
 import { z } from 'zod';
 

@@ -1,25 +1,29 @@
 // @ts-check
-// Runs `background.ts` (the job runner) in the server process, built and loaded by Vite like the
-// rest of the server code, so decorators, `import.meta.glob` and the `~/` alias work there too.
-//   astro build: adds background.ts as a second entry of the server build. Rollup shares every
-//     module with the app's entry, so `dist/server/background.mjs` and `dist/server/entry.mjs`
-//     loaded in one process use one ORM. `scripts/serve.mjs` imports and starts it.
+// Extra entries of the server build, built by Vite like the rest of the server code, so
+// decorators, `import.meta.glob` and the `~/` alias work there too, and Rollup shares every module
+// with the app's entry (one ORM per process):
+//   background.ts → dist/server/background.mjs, the job runner; `scripts/serve.mjs` starts it.
+//   config-check.ts → dist/server/config-check.mjs; `scripts/serve.mjs` checks the settings with it
+//     before it loads anything else.
+// Runs `background.ts` in the server process:
 //   astro dev: loads background.ts through the dev server's module graph (the one pages use)
 //     once the server listens, and stops it before the dev server closes. On SIGTERM, Vite closes
 //     the dev server and exits; on SIGINT nothing would, so that is handled here.
 import { fileURLToPath } from 'node:url';
 
 const entry = fileURLToPath(new URL('./background.ts', import.meta.url));
+const extraEntries = { background: entry, 'config-check': fileURLToPath(new URL('./config-check.ts', import.meta.url)) };
 
 /**
  * @param {import('rollup').InputOption | undefined} input
  * @returns {import('rollup').InputOption}
  */
-function withEntry(input) {
-  if (!input) return [entry];
-  if (typeof input === 'string') return [input, entry];
-  if (Array.isArray(input)) return [...input, entry];
-  return { ...input, background: entry };
+function withEntries(input) {
+  const files = Object.values(extraEntries);
+  if (!input) return files;
+  if (typeof input === 'string') return [input, ...files];
+  if (Array.isArray(input)) return [...input, ...files];
+  return { ...input, ...extraEntries };
 }
 
 /** @returns {import('astro').AstroIntegration} */
@@ -43,7 +47,7 @@ export function backgroundEntry() {
     hooks: {
       'astro:build:setup': ({ vite, target }) => {
         if (target !== 'server') return;
-        vite.plugins = [...(vite.plugins ?? []), { name: 'lapwing-background-entry', options: (options) => ({ ...options, input: withEntry(options.input) }) }];
+        vite.plugins = [...(vite.plugins ?? []), { name: 'lapwing-background-entry', options: (options) => ({ ...options, input: withEntries(options.input) }) }];
       },
       'astro:server:setup': ({ server }) => {
         devServer = server;
