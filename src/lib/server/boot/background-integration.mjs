@@ -47,7 +47,10 @@ export function backgroundEntry() {
     hooks: {
       'astro:build:setup': ({ vite, target }) => {
         if (target !== 'server') return;
-        vite.plugins = [...(vite.plugins ?? []), { name: 'lapwing-background-entry', options: (options) => ({ ...options, input: withEntries(options.input) }) }];
+        vite.plugins = [
+          ...(vite.plugins ?? []),
+          { name: 'lapwing-background-entry', options: (options) => ({ ...options, input: withEntries(options.input) }) },
+        ];
       },
       'astro:server:setup': ({ server }) => {
         devServer = server;
