@@ -4,7 +4,7 @@
  */
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
-import { overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
+import { OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
 import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
@@ -192,6 +192,24 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
   return { orientation: 'horizontal', boardWidth: faceWidth, gap: t.gap, ...run };
 }
 
+/**
+ * Where an upright at `x` goes: where it lands on a door or window, it moves to the nearer side of the
+ * opening (where it also trims the opening's edge), if that spot is on the wall and clear. Left where
+ * it fell, its length would depend on how the even spacing happens to meet the openings, and a longer
+ * wall could need less.
+ */
+function uprightBesideOpenings(ctx: WallContext, x: number, w: number, bottom: number, top: number): number {
+  const inBand = ctx.openings.filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01);
+  const clear = (at: number): boolean =>
+    at >= -1e-9 && at + w <= ctx.length + 1e-9 && inBand.every((o) => overlap(o.offset, o.offset + o.width, at, at + w) <= 0.01);
+  const hit = inBand.find((o) => overlap(o.offset, o.offset + o.width, x, x + w) > 0.01);
+  if (!hit) return x;
+  const left = hit.offset - w;
+  const right = hit.offset + hit.width;
+  const sides = Math.abs(x - left) <= Math.abs(x - right) ? [left, right] : [right, left];
+  return sides.find(clear) ?? x;
+}
+
 /** Vertical members (battens or stiles) spread evenly, one at each wall end, no more than `spacing` apart on centre. */
 function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
   const w = board.width;
@@ -199,7 +217,7 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
   const n = ctx.length <= 2 * w ? 1 : Math.ceil((ctx.length - w) / spacing - 1e-9) + 1;
   const pitch = n > 1 ? (ctx.length - w) / (n - 1) : 0;
   for (let i = 0; i < n; i++) {
-    const x = i * pitch;
+    const x = uprightBesideOpenings(ctx, i * pitch, w, bottom, top);
     for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
       let y = y0;
       for (const len of splitFull(y1 - y0, board.length)) {
@@ -245,13 +263,16 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
   let widthSum = 0;
   for (const [a, b] of subtractIntervals([m, ctx.length - m], blocked, minSide)) {
     const s = b - a;
-    // As near the target width as the stretch allows, but never so many that a frame is narrower than minSide.
-    const most = Math.max(1, Math.floor((s + t.frameGap) / (minSide + t.frameGap) + 1e-9));
-    const n = Math.min(most, Math.max(1, Math.round((s + t.frameGap) / (t.targetFrameWidth + t.frameGap))));
-    const fw = (s - (n - 1) * t.frameGap) / n;
+    // Frames keep the target width (or the whole stretch, when it is narrower) and as many as fit are
+    // centred in the stretch, the rest going to the margins. Re-dividing a longer stretch into more,
+    // narrower frames would change every piece, and shorter pieces can pack into fewer stock lengths,
+    // so a longer wall could cost less; with a fixed width a longer stretch only ever adds frames.
+    const fw = Math.min(s, Math.max(t.targetFrameWidth, minSide));
+    const n = Math.max(1, Math.floor((s + t.frameGap) / (fw + t.frameGap) + 1e-9));
+    const start = a + (s - (n * fw + (n - 1) * t.frameGap)) / 2;
     for (let i = 0; i < n; i++) {
       for (let r = 0; r < rows; r++) {
-        const x = a + i * (fw + t.frameGap);
+        const x = start + i * (fw + t.frameGap);
         const y = bottom + r * (fh + t.frameGap);
         ctx.pieces.push({ role: 'frame', x, y, width: fw, height: fh });
         // Source: TRADE.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
@@ -468,7 +489,7 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
   }
   if (rooms.some((r) => r.walls.some((w) => w.openings.some((o) => o.assumed)))) {
     notes.push(
-      `Doors and windows without measurements are drawn at common sizes: doors ${formatLength(36, units)} × ${formatLength(80, units)}, windows ${formatLength(36, units)} × ${formatLength(60, units)} with the sill at ${formatLength(36, units)}, spread evenly along the wall.`,
+      `Doors and windows without measurements are drawn at common sizes: doors ${formatLength(36, units)} × ${formatLength(80, units)}, windows ${formatLength(36, units)} × ${formatLength(60, units)} with the sill at ${formatLength(36, units)}, set from the left end of the wall ${formatLength(OPENING_SPACING, units)} apart.`,
     );
   }
   for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));
@@ -497,7 +518,7 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
  * with field paths) and its size, then works out every wall and room and the materials list.
  */
 export function takeoff(project: unknown, catalogue: Catalogue, units: Units = 'imperial'): Takeoff {
-  const p = validateProject(project, catalogue);
+  const p = validateProject(project, catalogue, undefined, units);
   checkProjectSize(p, catalogue);
   return takeoffOf(p, catalogue, units);
 }
