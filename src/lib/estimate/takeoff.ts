@@ -210,6 +210,19 @@ function uprightBesideOpenings(ctx: WallContext, x: number, w: number, bottom: n
   return sides.find(clear) ?? x;
 }
 
+/**
+ * Edges of an upright that need their own bead: an edge on a wall end is the corner's (or the end's)
+ * joint, and an edge against a door or window side is the opening's, both counted once elsewhere.
+ */
+function uprightEdgesToCaulk(ctx: WallContext, x: number, w: number, y0: number, y1: number): number {
+  const beside = (edge: number): boolean =>
+    ctx.openings.some(
+      (o) => (Math.abs(o.offset - edge) < 1e-6 || Math.abs(o.offset + o.width - edge) < 1e-6) && overlap(o.sillHeight, o.sillHeight + o.height, y0, y1) > 0.01,
+    );
+  const shared = (edge: number): boolean => edge < 1e-6 || edge > ctx.length - 1e-6 || beside(edge);
+  return (shared(x) ? 0 : 1) + (shared(x + w) ? 0 : 1);
+}
+
 /** Vertical members (battens or stiles) spread evenly, one at each wall end, no more than `spacing` apart on centre. */
 function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
   const w = board.width;
@@ -224,22 +237,25 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
         ctx.pieces.push({ role, x, y, width: w, height: len });
         addCuts(ctx.reg.lengths, board.id, [len]);
         ctx.trimFeet += len / 12;
-        ctx.caulkFeet += (2 * len) / 12;
+        ctx.caulkFeet += (uprightEdgesToCaulk(ctx, x, w, y, y + len) * len) / 12;
         y += len;
       }
     }
   }
 }
 
-/** A horizontal rail across the wall at [y, y + board width], broken by openings. */
-function layRail(ctx: WallContext, board: BoardStock, y: number): void {
+/**
+ * A horizontal rail across the wall at [y, y + board width], broken by openings. `edgesToCaulk` is 1
+ * where one of its edges is another joint's already (a top rail under the cap rail or the ceiling).
+ */
+function layRail(ctx: WallContext, board: BoardStock, y: number, edgesToCaulk: 1 | 2 = 2): void {
   for (const [x0, x1] of rowIntervals(ctx, y, y + board.width)) {
     let x = x0;
     for (const len of splitFull(x1 - x0, board.length)) {
       ctx.pieces.push({ role: 'rail', x, y, width: len, height: board.width });
       addCuts(ctx.reg.lengths, board.id, [len]);
       ctx.trimFeet += len / 12;
-      ctx.caulkFeet += (2 * len) / 12;
+      ctx.caulkFeet += (edgesToCaulk * len) / 12;
       x += len;
     }
   }
@@ -341,14 +357,17 @@ function wallTakeoff(
       const rail = t.topRailId ? boardById(catalogue, t.topRailId) : undefined;
       const top = rail ? bandTop - rail.width : bandTop;
       layUprights(ctx, boardById(catalogue, t.battenId), t.battenSpacing, bandBottom, top, 'batten');
-      if (rail) layRail(ctx, rail, top);
+      // The top rail's top edge is the cap rail's bottom edge (or the ceiling joint).
+      if (rail) layRail(ctx, rail, top, 1);
       break;
     }
     case 'flat-panel': {
       if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel');
       const rail = boardById(catalogue, t.railId);
-      layRail(ctx, rail, bandBottom);
-      layRail(ctx, rail, bandTop - rail.width);
+      // The bottom rail's bottom edge is the new baseboard's top joint when that is counted; the top
+      // rail's top edge is the cap rail's bottom edge (or the ceiling joint).
+      layRail(ctx, rail, bandBottom, room.replaceBaseboard ? 1 : 2);
+      layRail(ctx, rail, bandTop - rail.width, 1);
       layUprights(ctx, boardById(catalogue, t.stileId), t.stileSpacing, bandBottom + rail.width, bandTop - rail.width, 'stile');
       break;
     }
@@ -377,8 +396,7 @@ function wallTakeoff(
     baseboardFeet += (x1 - x0) / 12;
   }
   if (room.replaceBaseboard) ctx.caulkFeet += baseboardFeet;
-  // Wall ends and the edges of openings inside the band.
-  ctx.caulkFeet += (2 * coveredHeight) / 12;
+  // The edges of openings inside the band (the wall ends are counted per room, by its corners).
   for (const o of openings) {
     if (!o.inBand) continue;
     const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop);
@@ -446,6 +464,14 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const baseboardRemovedFeet = room.replaceBaseboard ? baseboardFeet : 0;
   trimFeet += capRailFeet + (room.replaceBaseboard ? baseboardFeet : 0);
   const n = walls.length;
+  // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
+  const insideCorners = room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1));
+  const outsideCorners = room.outsideCorners ?? 0;
+  // Each corner is one joint where two walls' work meets; every wall end that is not at a corner is
+  // a joint of its own: 2n ends, two at each corner.
+  const corners = Math.min(n, insideCorners + outsideCorners);
+  const bandHeight = walls[0] ? walls[0].coveredHeight : 0;
+  caulkFeet += ((2 * n - corners) * bandHeight) / 12;
   const panelSqFt = coversWall(t) ? netSqFt : 0;
   const paintSqFt = paint ? netSqFt + (capRailFeet * capRail.width + (room.replaceBaseboard ? baseboardFeet * baseboard.width : 0)) / 12 : 0;
   return {
@@ -462,9 +488,8 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     paintSqFt,
     cutOuts: sum((w) => w.cutOuts),
     returns: sum((w) => w.returns),
-    // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
-    insideCorners: room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1)),
-    outsideCorners: room.outsideCorners ?? 0,
+    insideCorners,
+    outsideCorners,
     capRailFeet,
     baseboardFeet,
     baseboardRemovedFeet,
