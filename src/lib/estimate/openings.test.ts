@@ -1,7 +1,7 @@
 /** Doors and windows on a wall: where counted ones go, and walls they cannot fit on. */
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
-import { estimate, EstimateInputError, sampleRateBook, type ProjectInput } from './index.ts';
+import { estimate, EstimateInputError, formatLength, sampleRateBook, type ProjectInput } from './index.ts';
 
 type Openings = ProjectInput['rooms'][number]['walls'][number]['openings'];
 
@@ -101,4 +101,14 @@ describe('counted doors and windows', () => {
       expect(wall.netSqFt).toBeGreaterThanOrEqual(-1e-9);
     },
   );
+
+  // The note a homeowner reads must describe the opening the takeoff drew (one source of defaults).
+  it('describes counted openings at the sizes and sill it placed them at', () => {
+    const e = estimate(project([{ length: 240, openings: [{ kind: 'door' }, { kind: 'window' }] }]), sampleRateBook());
+    const [door, window] = ['door', 'window'].map((k) => e.takeoff.rooms[0]!.walls[0]!.openings.find((o) => o.kind === k)!);
+    const note = e.takeoff.notes.find((n) => n.startsWith('Doors and windows without measurements'))!;
+    const len = (x: number): string => formatLength(x, 'imperial');
+    expect(note).toContain(`doors ${len(door!.width)} × ${len(door!.height)}`);
+    expect(note).toContain(`windows ${len(window!.width)} × ${len(window!.height)} with the sill at ${len(window!.sillHeight)}`);
+  });
 });

@@ -4,7 +4,7 @@
  */
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
-import { OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
+import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
 import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
@@ -513,8 +513,10 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
     notes.push('Where no wainscot height was given, it is one third of the ceiling height, a common design rule.');
   }
   if (rooms.some((r) => r.walls.some((w) => w.openings.some((o) => o.assumed)))) {
+    // The same defaults the openings were placed with (geometry.ts), so the note tells what was drawn.
+    const len = (x: number): string => formatLength(x, units);
     notes.push(
-      `Doors and windows without measurements are drawn at common sizes: doors ${formatLength(36, units)} × ${formatLength(80, units)}, windows ${formatLength(36, units)} × ${formatLength(60, units)} with the sill at ${formatLength(36, units)}, set from the left end of the wall ${formatLength(OPENING_SPACING, units)} apart.`,
+      `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart.`,
     );
   }
   for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));
