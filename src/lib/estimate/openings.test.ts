@@ -25,6 +25,12 @@ function fieldsOf(fn: () => unknown): Record<string, string> {
 
 describe('counted doors and windows', () => {
   // A wall can hold two openings only where they do not overlap (plain geometry, no source needed).
+  // A 36 in door on the 42 in end wall of a hallway: 3 in each side (common practice, no source).
+  it('fits a counted door on a narrow hallway end wall', () => {
+    const e = estimate(project([{ length: 42, openings: [{ kind: 'door' }] }]), sampleRateBook());
+    expect(e.takeoff.rooms[0]!.walls[0]!.openings[0]!.offset).toBe(3);
+  });
+
   // Spread evenly, these two windows once landed at 60–84 and 82–106 in.
   it('places two counted windows beside a measured door without overlap', () => {
     const e = estimate(
