@@ -53,7 +53,7 @@ function sixRooms(): ProjectInput {
       room('Hallway', 'picture-frame', 'wainscot', 240, 42),
       room('Main bedroom', 'shiplap-vertical-ply', 'full', 180, 156),
       room('Office', 'board-and-batten', 'full', 132, 120, { ceilingHeight: 108 }),
-      room('Powder room', 'picture-frame', 'wainscot', 72, 60, { damp: true }),
+      room('Powder room', 'picture-frame', 'wainscot', 84, 60, { damp: true }),
     ],
     paint: true,
     builtBefore1978: 'not-sure',

@@ -13,7 +13,7 @@ import { checkProject, parseRateBook, validateProject } from './validate.ts';
  */
 export function estimate(project: unknown, rateBook: unknown): Estimate {
   const rates = parseRateBook(rateBook);
-  return estimateParsed(validateProject(project, rates.catalogue, rates.extras.tripZones), rates);
+  return estimateParsed(validateProject(project, rates.catalogue, rates.extras.tripZones, rates.units), rates);
 }
 
 /**
@@ -21,7 +21,7 @@ export function estimate(project: unknown, rateBook: unknown): Estimate {
  * that passed `parseRateBook`. Only the checks that need the rate book run again.
  */
 export function estimateParsed(project: Project, rates: RateBook): Estimate {
-  const checked = checkProject(project, rates.catalogue, rates.extras.tripZones);
+  const checked = checkProject(project, rates.catalogue, rates.extras.tripZones, rates.units);
   checkProjectSize(checked, rates.catalogue);
   const takeoff = takeoffOf(checked, rates.catalogue, rates.units);
   return { takeoff, price: priceRange(takeoff, rates) };

@@ -54,13 +54,18 @@ function openingSize(o: Opening): { width: number; height: number; sillHeight: n
   };
 }
 
-/**
- * Expands counted openings and gives each a place: measured offsets are kept; the rest are spread
- * evenly over the wall between the placed ones. Validation has already checked that they fit.
- */
-export function placeOpenings(openings: Opening[], wallLength: number): Array<Omit<PlacedOpening, 'inBand'>> {
-  const fixed: Array<Omit<PlacedOpening, 'inBand'>> = [];
-  const loose: Array<Omit<PlacedOpening, 'inBand' | 'offset'>> = [];
+// Room beside a counted opening, from a wall end or the next opening: about a casing's width
+// (2-1/4 to 2-1/2 in) and a little to spare, so a 36 in door still fits the 42 in end wall of a
+// hallway (common practice, no source).
+export const OPENING_SPACING = 3;
+
+type Placed = Omit<PlacedOpening, 'inBand'>;
+type Loose = Omit<PlacedOpening, 'inBand' | 'offset'>;
+
+/** Measured openings keep their place; counted ones are listed in the order given, sizes filled in. */
+function splitOpenings(openings: Opening[]): { fixed: Placed[]; loose: Loose[] } {
+  const fixed: Placed[] = [];
+  const loose: Loose[] = [];
   for (const o of openings) {
     const size = openingSize(o);
     for (let i = 0; i < o.count; i++) {
@@ -68,33 +73,50 @@ export function placeOpenings(openings: Opening[], wallLength: number): Array<Om
       else loose.push({ kind: o.kind, ...size, assumed: true });
     }
   }
-  if (loose.length === 0) return fixed.sort((a, b) => a.offset - b.offset);
-  // Spread the loose ones evenly through the free stretches, in proportion to their length.
+  return { fixed, loose };
+}
+
+export type OpeningPlacement = { ok: true; openings: Placed[] } | { ok: false; free: Interval[]; unplaced: Loose[] };
+
+/**
+ * Expands counted openings and gives each a place: measured offsets are kept; each counted one goes,
+ * in the order given, into the first free stretch (between the wall ends and the measured openings)
+ * that holds it with OPENING_SPACING on both sides, OPENING_SPACING after the one before it.
+ *
+ * The places depend only on the openings, never on the wall's length: a longer wall keeps every
+ * opening where it was and only gains wall at its right end, so it never needs less material (spread
+ * evenly, an opening would slide along the boards or battens as the wall grows, and a board that was
+ * needed beside it could disappear). Not ok when some do not fit; validation refuses such a wall.
+ */
+export function tryPlaceOpenings(openings: Opening[], wallLength: number): OpeningPlacement {
+  const { fixed, loose } = splitOpenings(openings);
   const free = subtractIntervals(
     [0, wallLength],
     fixed.map((f) => [f.offset, f.offset + f.width] as const),
+    0,
   );
-  const freeTotal = free.reduce((s, [a, b]) => s + (b - a), 0);
-  const looseWidth = loose.reduce((s, o) => s + o.width, 0);
-  const space = Math.max(0, freeTotal - looseWidth) / (loose.length + 1);
+  const cursor = free.map(([a]) => a);
   const placed = [...fixed];
-  // Walk the free stretches as if laid end to end: space, opening, space, opening, …, space.
-  let cursor = space;
+  const unplaced: Loose[] = [];
   for (const o of loose) {
-    let at = cursor;
-    let offset = free.length > 0 ? free[free.length - 1]![1] - o.width : 0;
-    for (const [a, b] of free) {
-      if (at + o.width <= b - a + EPS) {
-        offset = a + at;
-        break;
-      }
-      at -= b - a;
-      if (at < 0) at = 0;
+    const i = free.findIndex(([, b], k) => cursor[k]! + OPENING_SPACING + o.width + OPENING_SPACING <= b + EPS);
+    if (i < 0) {
+      unplaced.push(o);
+      continue;
     }
-    placed.push({ ...o, offset: Math.max(0, Math.min(offset, wallLength - o.width)) });
-    cursor += o.width + space;
+    const offset = cursor[i]! + OPENING_SPACING;
+    placed.push({ ...o, offset });
+    cursor[i] = offset + o.width;
   }
-  return placed.sort((a, b) => a.offset - b.offset);
+  if (unplaced.length > 0) return { ok: false, free, unplaced };
+  return { ok: true, openings: placed.sort((a, b) => a.offset - b.offset) };
+}
+
+/** The places of `tryPlaceOpenings` for a wall validation has already accepted. */
+export function placeOpenings(openings: Opening[], wallLength: number): Placed[] {
+  const placed = tryPlaceOpenings(openings, wallLength);
+  if (!placed.ok) throw new RangeError('placeOpenings: the openings do not fit on the wall; validate the project first');
+  return placed.openings;
 }
 
 /**

@@ -10,9 +10,12 @@ const r2 = (x: number): number => Math.round(x * 100) / 100;
 const pct = (f: number): string => `${r2(f * 100)} %`;
 
 /**
- * Prices a takeoff: materials with markup, labour, extras and tax, raised to the minimum job, then
- * widened into a low–high range by how the walls were measured and whether photos came with them.
- * Low is rounded down and high up to the rounding step; neither is below the minimum job.
+ * Prices a takeoff: materials with markup, labour, extras and tax, then a low–high range by how the
+ * walls were measured and whether photos came with them, low rounded down and high up to the
+ * rounding step. The minimum job is a floor under each end, not a price to widen: the job's own
+ * price is spread first, then low = max(minimum, own low) and high = max(minimum, own high); the
+ * middle is max(minimum, own price), and a "Minimum job" line makes the lines add up to it. So a job
+ * under the minimum still shows its own upper estimate when that is above the minimum.
  */
 export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
   const money = (c: number): string => formatMoney(c, rateBook.currency, rateBook.locale);
@@ -106,12 +109,12 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
   if (minimumApplied) {
     lines.push({
       group: 'minimum',
-      label: 'Raised to the minimum job',
+      label: 'Minimum job',
       quantity: 1,
       unit: 'job',
       unitCents: totalCents - subtotalCents,
       totalCents: totalCents - subtotalCents,
-      basis: `the firm's minimum job is ${money(rateBook.minimumJobCents)}`,
+      basis: `the firm's minimum job is ${money(rateBook.minimumJobCents)}; this job comes to ${money(subtotalCents)}`,
     });
   }
 
@@ -121,8 +124,8 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
     takeoff.facts.measuredBy
   ];
   const step = rateBook.roundingCents;
-  const lowCents = Math.max(rateBook.minimumJobCents, roundDownTo(Math.floor(totalCents * (1 - spread.below)), step));
-  const highCents = Math.max(lowCents, rateBook.minimumJobCents, roundUpTo(Math.ceil(totalCents * (1 + spread.above)), step));
+  const lowCents = Math.max(rateBook.minimumJobCents, roundDownTo(Math.floor(subtotalCents * (1 - spread.below)), step));
+  const highCents = Math.max(lowCents, rateBook.minimumJobCents, roundUpTo(Math.ceil(subtotalCents * (1 + spread.above)), step));
   const whole = step % 100 === 0;
   const fmtRange = (c: number): string => formatMoney(c, rateBook.currency, rateBook.locale, { wholeUnits: whole });
   return {
@@ -144,7 +147,7 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
     spread: {
       below: spread.below,
       above: spread.above,
-      basis: `measured from ${method}, ${photos ? 'with photos' : 'without photos'}: ${pct(spread.below)} below to ${pct(spread.above)} above ${money(totalCents)}, rounded to ${money(step)}`,
+      basis: `measured from ${method}, ${photos ? 'with photos' : 'without photos'}: ${pct(spread.below)} below to ${pct(spread.above)} above ${money(subtotalCents)}, rounded to ${money(step)}${minimumApplied ? `, and neither end below the minimum job of ${money(rateBook.minimumJobCents)}` : ''}`,
     },
     rangeText: lowCents === highCents ? fmtRange(lowCents) : `${fmtRange(lowCents)} – ${fmtRange(highCents)}`,
   };

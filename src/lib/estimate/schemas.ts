@@ -60,7 +60,7 @@ export const openingSchema = z.strictObject({
   width: inches('Opening width', 12, 240).optional(),
   height: inches('Opening height', 12, 144).optional(),
   sillHeight: inches('Sill height', 0, 120).optional(),
-  /** Distance from the wall's left end to the opening's left edge; spread evenly when left out. */
+  /** Distance from the wall's left end to the opening's left edge; set from the left end when left out. */
   offset: inches('Distance from the left end', 0, 1200).optional(),
 });
 

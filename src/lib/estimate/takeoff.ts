@@ -4,7 +4,7 @@
  */
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
-import { overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
+import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
 import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
@@ -192,6 +192,37 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
   return { orientation: 'horizontal', boardWidth: faceWidth, gap: t.gap, ...run };
 }
 
+/**
+ * Where an upright at `x` goes: where it lands on a door or window, it moves to the nearer side of the
+ * opening (where it also trims the opening's edge), if that spot is on the wall and clear. Left where
+ * it fell, its length would depend on how the even spacing happens to meet the openings, and a longer
+ * wall could need less.
+ */
+function uprightBesideOpenings(ctx: WallContext, x: number, w: number, bottom: number, top: number): number {
+  const inBand = ctx.openings.filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01);
+  const clear = (at: number): boolean =>
+    at >= -1e-9 && at + w <= ctx.length + 1e-9 && inBand.every((o) => overlap(o.offset, o.offset + o.width, at, at + w) <= 0.01);
+  const hit = inBand.find((o) => overlap(o.offset, o.offset + o.width, x, x + w) > 0.01);
+  if (!hit) return x;
+  const left = hit.offset - w;
+  const right = hit.offset + hit.width;
+  const sides = Math.abs(x - left) <= Math.abs(x - right) ? [left, right] : [right, left];
+  return sides.find(clear) ?? x;
+}
+
+/**
+ * Edges of an upright that need their own bead: an edge on a wall end is the corner's (or the end's)
+ * joint, and an edge against a door or window side is the opening's, both counted once elsewhere.
+ */
+function uprightEdgesToCaulk(ctx: WallContext, x: number, w: number, y0: number, y1: number): number {
+  const beside = (edge: number): boolean =>
+    ctx.openings.some(
+      (o) => (Math.abs(o.offset - edge) < 1e-6 || Math.abs(o.offset + o.width - edge) < 1e-6) && overlap(o.sillHeight, o.sillHeight + o.height, y0, y1) > 0.01,
+    );
+  const shared = (edge: number): boolean => edge < 1e-6 || edge > ctx.length - 1e-6 || beside(edge);
+  return (shared(x) ? 0 : 1) + (shared(x + w) ? 0 : 1);
+}
+
 /** Vertical members (battens or stiles) spread evenly, one at each wall end, no more than `spacing` apart on centre. */
 function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
   const w = board.width;
@@ -199,29 +230,32 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
   const n = ctx.length <= 2 * w ? 1 : Math.ceil((ctx.length - w) / spacing - 1e-9) + 1;
   const pitch = n > 1 ? (ctx.length - w) / (n - 1) : 0;
   for (let i = 0; i < n; i++) {
-    const x = i * pitch;
+    const x = uprightBesideOpenings(ctx, i * pitch, w, bottom, top);
     for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
       let y = y0;
       for (const len of splitFull(y1 - y0, board.length)) {
         ctx.pieces.push({ role, x, y, width: w, height: len });
         addCuts(ctx.reg.lengths, board.id, [len]);
         ctx.trimFeet += len / 12;
-        ctx.caulkFeet += (2 * len) / 12;
+        ctx.caulkFeet += (uprightEdgesToCaulk(ctx, x, w, y, y + len) * len) / 12;
         y += len;
       }
     }
   }
 }
 
-/** A horizontal rail across the wall at [y, y + board width], broken by openings. */
-function layRail(ctx: WallContext, board: BoardStock, y: number): void {
+/**
+ * A horizontal rail across the wall at [y, y + board width], broken by openings. `edgesToCaulk` is 1
+ * where one of its edges is another joint's already (a top rail under the cap rail or the ceiling).
+ */
+function layRail(ctx: WallContext, board: BoardStock, y: number, edgesToCaulk: 1 | 2 = 2): void {
   for (const [x0, x1] of rowIntervals(ctx, y, y + board.width)) {
     let x = x0;
     for (const len of splitFull(x1 - x0, board.length)) {
       ctx.pieces.push({ role: 'rail', x, y, width: len, height: board.width });
       addCuts(ctx.reg.lengths, board.id, [len]);
       ctx.trimFeet += len / 12;
-      ctx.caulkFeet += (2 * len) / 12;
+      ctx.caulkFeet += (edgesToCaulk * len) / 12;
       x += len;
     }
   }
@@ -245,13 +279,16 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
   let widthSum = 0;
   for (const [a, b] of subtractIntervals([m, ctx.length - m], blocked, minSide)) {
     const s = b - a;
-    // As near the target width as the stretch allows, but never so many that a frame is narrower than minSide.
-    const most = Math.max(1, Math.floor((s + t.frameGap) / (minSide + t.frameGap) + 1e-9));
-    const n = Math.min(most, Math.max(1, Math.round((s + t.frameGap) / (t.targetFrameWidth + t.frameGap))));
-    const fw = (s - (n - 1) * t.frameGap) / n;
+    // Frames keep the target width (or the whole stretch, when it is narrower) and as many as fit are
+    // centred in the stretch, the rest going to the margins. Re-dividing a longer stretch into more,
+    // narrower frames would change every piece, and shorter pieces can pack into fewer stock lengths,
+    // so a longer wall could cost less; with a fixed width a longer stretch only ever adds frames.
+    const fw = Math.min(s, Math.max(t.targetFrameWidth, minSide));
+    const n = Math.max(1, Math.floor((s + t.frameGap) / (fw + t.frameGap) + 1e-9));
+    const start = a + (s - (n * fw + (n - 1) * t.frameGap)) / 2;
     for (let i = 0; i < n; i++) {
       for (let r = 0; r < rows; r++) {
-        const x = a + i * (fw + t.frameGap);
+        const x = start + i * (fw + t.frameGap);
         const y = bottom + r * (fh + t.frameGap);
         ctx.pieces.push({ role: 'frame', x, y, width: fw, height: fh });
         // Source: TRADE.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
@@ -320,14 +357,17 @@ function wallTakeoff(
       const rail = t.topRailId ? boardById(catalogue, t.topRailId) : undefined;
       const top = rail ? bandTop - rail.width : bandTop;
       layUprights(ctx, boardById(catalogue, t.battenId), t.battenSpacing, bandBottom, top, 'batten');
-      if (rail) layRail(ctx, rail, top);
+      // The top rail's top edge is the cap rail's bottom edge (or the ceiling joint).
+      if (rail) layRail(ctx, rail, top, 1);
       break;
     }
     case 'flat-panel': {
       if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel');
       const rail = boardById(catalogue, t.railId);
-      layRail(ctx, rail, bandBottom);
-      layRail(ctx, rail, bandTop - rail.width);
+      // The bottom rail's bottom edge is the new baseboard's top joint when that is counted; the top
+      // rail's top edge is the cap rail's bottom edge (or the ceiling joint).
+      layRail(ctx, rail, bandBottom, room.replaceBaseboard ? 1 : 2);
+      layRail(ctx, rail, bandTop - rail.width, 1);
       layUprights(ctx, boardById(catalogue, t.stileId), t.stileSpacing, bandBottom + rail.width, bandTop - rail.width, 'stile');
       break;
     }
@@ -356,8 +396,7 @@ function wallTakeoff(
     baseboardFeet += (x1 - x0) / 12;
   }
   if (room.replaceBaseboard) ctx.caulkFeet += baseboardFeet;
-  // Wall ends and the edges of openings inside the band.
-  ctx.caulkFeet += (2 * coveredHeight) / 12;
+  // The edges of openings inside the band (the wall ends are counted per room, by its corners).
   for (const o of openings) {
     if (!o.inBand) continue;
     const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop);
@@ -425,6 +464,14 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const baseboardRemovedFeet = room.replaceBaseboard ? baseboardFeet : 0;
   trimFeet += capRailFeet + (room.replaceBaseboard ? baseboardFeet : 0);
   const n = walls.length;
+  // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
+  const insideCorners = room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1));
+  const outsideCorners = room.outsideCorners ?? 0;
+  // Each corner is one joint where two walls' work meets; every wall end that is not at a corner is
+  // a joint of its own: 2n ends, two at each corner.
+  const corners = Math.min(n, insideCorners + outsideCorners);
+  const bandHeight = walls[0] ? walls[0].coveredHeight : 0;
+  caulkFeet += ((2 * n - corners) * bandHeight) / 12;
   const panelSqFt = coversWall(t) ? netSqFt : 0;
   const paintSqFt = paint ? netSqFt + (capRailFeet * capRail.width + (room.replaceBaseboard ? baseboardFeet * baseboard.width : 0)) / 12 : 0;
   return {
@@ -441,9 +488,8 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     paintSqFt,
     cutOuts: sum((w) => w.cutOuts),
     returns: sum((w) => w.returns),
-    // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
-    insideCorners: room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1)),
-    outsideCorners: room.outsideCorners ?? 0,
+    insideCorners,
+    outsideCorners,
     capRailFeet,
     baseboardFeet,
     baseboardRemovedFeet,
@@ -467,8 +513,10 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
     notes.push('Where no wainscot height was given, it is one third of the ceiling height, a common design rule.');
   }
   if (rooms.some((r) => r.walls.some((w) => w.openings.some((o) => o.assumed)))) {
+    // The same defaults the openings were placed with (geometry.ts), so the note tells what was drawn.
+    const len = (x: number): string => formatLength(x, units);
     notes.push(
-      `Doors and windows without measurements are drawn at common sizes: doors ${formatLength(36, units)} × ${formatLength(80, units)}, windows ${formatLength(36, units)} × ${formatLength(60, units)} with the sill at ${formatLength(36, units)}, spread evenly along the wall.`,
+      `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart.`,
     );
   }
   for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));
@@ -497,7 +545,7 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
  * with field paths) and its size, then works out every wall and room and the materials list.
  */
 export function takeoff(project: unknown, catalogue: Catalogue, units: Units = 'imperial'): Takeoff {
-  const p = validateProject(project, catalogue);
+  const p = validateProject(project, catalogue, undefined, units);
   checkProjectSize(p, catalogue);
   return takeoffOf(p, catalogue, units);
 }

@@ -1,7 +1,8 @@
 /** Checks on a project beyond its schema: things only the rate book or the wall's own numbers can tell. */
 import { EstimateInputError, fieldsFromZod } from './errors.ts';
-import { DEFAULT_DOOR, DEFAULT_WINDOW } from './geometry.ts';
+import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, tryPlaceOpenings } from './geometry.ts';
 import { projectSchema, rateBookSchema, type Catalogue, type Project, type RateBook } from './schemas.ts';
+import { formatLength, type Units } from './units.ts';
 
 const fmt = (x: number): string => `${Math.round(x * 100) / 100} in`;
 
@@ -9,17 +10,18 @@ const fmt = (x: number): string => `${Math.round(x * 100) / 100} in`;
  * Parses and checks a project against the catalogue. Throws EstimateInputError whose `fields` map
  * names each bad field (e.g. `rooms.0.walls.1.openings.0.width`).
  */
-export function validateProject(input: unknown, catalogue: Catalogue, tripZones?: Array<{ id: string }>): Project {
+export function validateProject(input: unknown, catalogue: Catalogue, tripZones?: Array<{ id: string }>, units: Units = 'imperial'): Project {
   const parsed = projectSchema.safeParse(input);
   if (!parsed.success) throw new EstimateInputError(fieldsFromZod(parsed.error));
-  return checkProject(parsed.data, catalogue, tripZones);
+  return checkProject(parsed.data, catalogue, tripZones, units);
 }
 
 /**
  * The checks of `validateProject` that need the rate book or the wall's own numbers, for a project
  * that has already passed `projectSchema` (an API body parsed once by its request schema).
  */
-export function checkProject(project: Project, catalogue: Catalogue, tripZones?: Array<{ id: string }>): Project {
+export function checkProject(project: Project, catalogue: Catalogue, tripZones?: Array<{ id: string }>, units: Units = 'imperial'): Project {
+  const len = (x: number): string => formatLength(x, units);
   const fields: Record<string, string> = {};
   const bad = (path: string, message: string): void => {
     if (!(path in fields)) fields[path] = message;
@@ -58,7 +60,7 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
       const length = wall.length ?? (wall.side === 'width' ? room.width : room.length);
       if (length === undefined) return;
 
-      let total = 0;
+      const errorsBefore = Object.keys(fields).length;
       const fixed: Array<{ a: number; b: number; o: number }> = [];
       wall.openings.forEach((o, i) => {
         const op = `${wp}.openings.${i}`;
@@ -66,7 +68,6 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
         const width = o.width ?? d.width;
         const height = o.height ?? d.height;
         const sill = o.sillHeight ?? d.sillHeight;
-        total += width * o.count;
         if (width > length) bad(`${op}.width`, `Opening width (${fmt(width)}) is more than the wall is long (${fmt(length)}).`);
         if (sill + height > room.ceilingHeight) {
           bad(`${op}.height`, `The opening's top (sill ${fmt(sill)} + height ${fmt(height)}) is above the ceiling (${fmt(room.ceilingHeight)}).`);
@@ -78,10 +79,22 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
           else fixed.push({ a: o.offset, b: o.offset + width, o: i });
         }
       });
-      if (total > length + 1e-6) bad(`${wp}.openings`, `The openings add up to ${fmt(total)}, more than the wall's ${fmt(length)}.`);
+      // Measured openings may not overlap: the takeoff would take the overlap off the wall twice.
       fixed.sort((x, y) => x.a - y.a);
       for (let i = 1; i < fixed.length; i++) {
         if (fixed[i]!.a < fixed[i - 1]!.b - 1e-6) bad(`${wp}.openings.${fixed[i]!.o}.offset`, 'This opening overlaps another opening on the same wall.');
+      }
+      if (Object.keys(fields).length > errorsBefore) return;
+      // Counted openings must each find room beside the measured ones, not just add up to less than the wall.
+      const placement = tryPlaceOpenings(wall.openings, length);
+      if (!placement.ok) {
+        const kinds = (list: Array<{ kind: string; width: number }>): string =>
+          list.map((o) => `${o.kind === 'door' ? 'a door' : 'a window'} ${len(o.width)} wide`).join(', ');
+        const free = placement.free.filter(([a, b]) => b - a >= 0.01).map(([a, b]) => len(b - a));
+        bad(
+          `${wp}.openings`,
+          `The doors and windows without a distance from the left end do not fit on this ${len(length)} wall beside the others: no room for ${kinds(placement.unplaced)} (each needs ${len(OPENING_SPACING)} clear on both sides; the free stretches are ${free.join(', ') || 'none'}). Give each opening its distance from the left end, or check the count.`,
+        );
       }
     });
   });

@@ -19,7 +19,7 @@ export type HomeownerEstimate = {
   rangeReason: string;
   minimumApplied: boolean;
   /** How the middle of the range adds up. */
-  groups: { id: 'materials' | 'labour' | 'extras' | 'tax'; label: string; cents: number }[];
+  groups: { id: 'materials' | 'labour' | 'extras' | 'tax' | 'minimum'; label: string; cents: number }[];
   extras: string[];
   rooms: { name: string; treatmentName: string; height: 'wainscot' | 'full'; netSqFt: number; walls: HomeownerWall[] }[];
   materials: { label: string; quantity: number; unit: string }[];

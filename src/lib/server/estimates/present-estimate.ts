@@ -58,6 +58,8 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
     { id: 'labour', label: `Installation${takeoff.facts.paint ? ' and painting' : ''}`, cents: price.labourCents },
     { id: 'extras', label: 'Set-up and extras', cents: price.extrasCents },
     { id: 'tax', label: 'Tax', cents: price.taxCents },
+    // Under the firm's minimum the difference is its own line, so the groups add up to the middle of the range.
+    { id: 'minimum', label: 'Minimum job', cents: price.totalCents - price.subtotalCents },
   ];
   return {
     units: takeoff.units,
