@@ -434,7 +434,9 @@ function wallTakeoff(
     openings,
     boxes,
     cutOuts: covered,
-    returns: openings.filter((o) => o.inBand).length,
+    // A return wherever the treatment stops at an opening: in the covered band, or where the cap rail
+    // runs into the opening and is returned at its edge (common practice, no source).
+    returns: openings.filter((o) => o.inBand || (wainscot && overlap(o.sillHeight, o.sillHeight + o.height, bandTop, bandTop + capRail.width) > 0)).length,
     ...(boards ? { boards } : {}),
     ...(frames ? { frames } : {}),
     pieces: ctx.pieces,
