@@ -1,15 +1,16 @@
 import { MikroORM } from '@mikro-orm/postgresql';
+import type { Constructor } from '@mikro-orm/core';
 import type { Migration } from '@mikro-orm/migrations';
 import { provideOrm } from '../db/orm-provider';
 
 // Vite bundles the migrations into the server, because the migrator's own file loading uses a
 // native import() of .ts files that only works under tsx (the CLI), not in the built app or vitest.
-const migrationModules = import.meta.glob<Record<string, new (...args: never[]) => Migration>>('../../../../migrations/Migration*.ts', { eager: true });
+const migrationModules = import.meta.glob<Record<string, Constructor<Migration>>>('../../../../migrations/Migration*.ts', { eager: true });
 
 export const migrationsList = Object.entries(migrationModules)
   .map(([file, module]) => {
     const name = file.split('/').pop()!.replace(/\.ts$/, '');
-    return { name, class: module[name] as never };
+    return { name, class: module[name]! };
   })
   .sort((a, b) => a.name.localeCompare(b.name));
 
