@@ -33,9 +33,9 @@ const TARGET = {
 // Source: Lighthouse docs/throttling.md (mobile "Slow 4G": 150 ms RTT, 1.6 Mbps down, 750 Kbps up) as
 // applied by the DevTools method, per chrome-devtools-frontend lantern Constants.ts: latency × 3.75,
 // throughput × 0.9 — 562.5 ms, 1474.56 Kbit/s down, 675 Kbit/s up; CDP wants bytes/s (×1024/8).
-// Both are cited in /work/shared/QUALITY.md §3.1–3.2 ([S49], [S50]).
+// Both are collected in docs/sources.md §16.
 const SLOW_4G = { offline: false, latency: 562.5, downloadThroughput: (1474.56 * 1024) / 8, uploadThroughput: (675 * 1024) / 8 };
-// Source: Lighthouse mobile CPU throttling, cpuSlowdownMultiplier 4 (QUALITY.md §3.1, [S50]).
+// Source: Lighthouse mobile CPU throttling, cpuSlowdownMultiplier 4 (Lighthouse throttling docs; docs/sources.md §16).
 const CPU_SLOWDOWN = 4;
 const LCP_RUNS = 5;
 

@@ -226,7 +226,7 @@ describe('files that are refused', () => {
     await expectRefused(windowsExecutable(), { name: 'kitchen.jpg', type: 'image/jpeg' }, NOT_A_PHOTO);
   });
 
-  // Source: OWASP File Upload Cheat Sheet and QUALITY.md 1.3: SVG is XML that can run script.
+  // Source: OWASP File Upload Cheat Sheet (docs/sources.md §14): SVG is XML that can run script.
   test('an SVG with a script is refused', async () => {
     await expectRefused(svgWithScript, { name: 'wall.svg', type: 'image/svg+xml' }, NOT_A_PHOTO);
   });
@@ -244,7 +244,7 @@ describe('files that are refused', () => {
       fields: { size: 'This photo is over 15 MB. Please pick a smaller one.' },
     });
 
-    // The stand-in does not enforce the POST policy (STACK.md addendum), so the 16 MB upload is
+    // The stand-in does not enforce the POST policy (docs/sources.md §15), so the 16 MB upload is
     // stored; the server's own size check after the upload is what refuses it.
     await expectRefused(sixteenMegabyteFile(), { name: 'big.jpg', type: 'image/jpeg', declaredSize: 2 * MiB }, /over 15 MB/);
   });

@@ -3,13 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { boardPositions, boardRun } from './board-run.ts';
 
 describe('boardRun', () => {
-  // Source: TRADE.md §12 [computed here] — 25·5.5 + 25·0.125 = 140.625 in, last board 3-3/8 in.
+  // Source: docs/sources.md §12 [computed here] — 25·5.5 + 25·0.125 = 140.625 in, last board 3-3/8 in.
   it('rips the last 1x6 board to 3-3/8 in on a 12 ft wall with 1/8 in gaps', () => {
     expect(boardRun(144, 5.5, 0.125)).toEqual({ count: 26, lastWidth: 3.375, leftover: 0 });
   });
 
   it('keeps the full width when the run comes out exactly', () => {
-    // 8 strips of 5-7/8 in with 7 gaps of 1/8 in = 47.875 in (TRADE.md §9, computed here).
+    // 8 strips of 5-7/8 in with 7 gaps of 1/8 in = 47.875 in (docs/sources.md §9, computed here).
     expect(boardRun(47.875, 5.875, 0.125)).toEqual({ count: 8, lastWidth: 5.875, leftover: 0 });
   });
 

@@ -2,7 +2,7 @@
 import type { Catalogue, Project } from './schemas.ts';
 import type { Caution, RoomTakeoff } from './types.ts';
 
-// Source: TRADE.md §5 — 40 CFR 745.83 minor repair and maintenance: 6 sq ft or less of painted surface per room (interior).
+// Source: 40 CFR 745.83 minor repair and maintenance: 6 sq ft or less of painted surface per room (interior); docs/sources.md §5.
 export const LEAD_MINOR_REPAIR_SQ_FT = 6;
 
 function namesOf(rooms: RoomTakeoff[]): string[] {
@@ -10,7 +10,7 @@ function namesOf(rooms: RoomTakeoff[]): string[] {
 }
 
 /**
- * Which cautions apply and why. Triggers (TRADE.md):
+ * Which cautions apply and why. Triggers (sections of docs/sources.md):
  * any wood finish over an electrical box → box extender and power off (NEC 314.20, §4);
  * built before 1978 or not sure → lead-safe practices (EPA RRP rule, §5);
  * damp room → moisture-resistant materials, sealed faces, no wood in the tub or shower surround (IRC R307.2, §10);

@@ -69,7 +69,7 @@ describe('estimate of the sample project (invented demo data)', () => {
     const bed = e.takeoff.rooms[1]!.walls[0]!;
     // 150 in of 5-7/8 in strips with 1/8 in gaps: 25 strips use 149.875 in (computed here).
     expect(bed.boards).toMatchObject({ count: 25, lastWidth: 5.875 });
-    // Source: TRADE.md §9 — 5-7/8 in strips with a 1/8 in kerf: 8 from a 48 in sheet width.
+    // Source: docs/sources.md §9 — 5-7/8 in strips with a 1/8 in kerf: 8 from a 48 in sheet width.
     expect(e.takeoff.materials.find((m) => m.id === 'sheet:ply-4x8-quarter')?.piecesPerSheet).toBe(8);
   });
 
@@ -83,7 +83,7 @@ describe('estimate of the sample project (invented demo data)', () => {
 describe('cautions', () => {
   const ids = (p: ProjectInput): string[] => estimate(p, rateBook).takeoff.cautions.map((c) => c.id);
 
-  // Source: NEC 314.20 via TRADE.md §4 — a combustible (wood) finish needs boxes flush: any box under the finish → extender.
+  // Source: NEC 314.20 (docs/sources.md §4) — a combustible (wood) finish needs boxes flush: any box under the finish → extender.
   it('asks for box extenders and the breaker when boxes sit under a wood finish', () => {
     expect(ids(oneWall(120, 'shiplap-vertical-ply', 'wainscot'))).toContain('electrical-boxes');
     expect(ids(oneWall(120, 'shiplap-vertical-ply', 'wainscot', {}, 0))).not.toContain('electrical-boxes');
@@ -92,14 +92,14 @@ describe('cautions', () => {
     expect(c.text).toMatch(/licensed electrician/);
   });
 
-  // Source: EPA RRP rule, 40 CFR 745 (TRADE.md §5) — pre-1978 or not sure → lead-safe caution.
+  // Source: EPA RRP rule, 40 CFR 745 (docs/sources.md §5) — pre-1978 or not sure → lead-safe caution.
   it('adds lead-safe practices for homes built before 1978 or when not sure', () => {
     expect(ids(oneWall(120, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }))).toContain('lead-safe');
     expect(ids(oneWall(120, 'beadboard', 'wainscot', { builtBefore1978: 'not-sure' }))).toContain('lead-safe');
     expect(ids(oneWall(120, 'beadboard', 'wainscot', { builtBefore1978: 'no' }))).not.toContain('lead-safe');
   });
 
-  // Source: TRADE.md §5 — removing 60 ft of 5.5 in painted baseboard disturbs 27.5 sq ft (> 6 sq ft) → RRP applies; 12 ft → 5.5 sq ft (minor repair).
+  // Source: docs/sources.md §5 — removing 60 ft of 5.5 in painted baseboard disturbs 27.5 sq ft (> 6 sq ft) → RRP applies; 12 ft → 5.5 sq ft (minor repair).
   it('charges lead-safe set-up when removed painted baseboard passes 6 sq ft in a room', () => {
     const p = (len: number): ProjectInput => ({
       ...oneWall(len, 'beadboard', 'wainscot', { builtBefore1978: 'yes' }),
@@ -113,7 +113,7 @@ describe('cautions', () => {
     expect(small.price.lines.some((l) => l.label === 'Lead-safe set-up')).toBe(false);
   });
 
-  // Source: IRC R307.2 and MDF industry guidance (TRADE.md §10) — damp rooms: moisture-resistant materials, no wood in the wet zone.
+  // Source: IRC R307.2 and MDF industry guidance (docs/sources.md §10) — damp rooms: moisture-resistant materials, no wood in the wet zone.
   it('warns about moisture in damp rooms and ladders for full height', () => {
     const damp = oneWall(120, 'beadboard', 'wainscot');
     damp.rooms[0]!.damp = true;

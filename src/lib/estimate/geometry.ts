@@ -5,7 +5,7 @@ import type { PlacedBox, PlacedOpening } from './types.ts';
 export type Interval = readonly [number, number];
 
 // Defaults for openings a homeowner only counts.
-// Source: TRADE.md §7 worked example — a 3'0" × 6'8" door (20 sq ft) and a 3 × 5 ft window (15 sq ft); common practice, no source.
+// Source: docs/sources.md §7 worked example — a 3'0" × 6'8" door (20 sq ft) and a 3 × 5 ft window (15 sq ft); common practice, no source.
 export const DEFAULT_DOOR = { width: 36, height: 80, sillHeight: 0 } as const;
 // Window sill at 20 in, so its head lines up with a 6'8" door head at 80 in and stays below an
 // 8 ft ceiling: common practice, no source.
@@ -13,7 +13,7 @@ export const DEFAULT_WINDOW = { width: 36, height: 60, sillHeight: 20 } as const
 
 // Electrical box cut-out, a single-gang device box: about 2-1/4 × 3-3/4 in (from memory).
 export const BOX_CUTOUT = { width: 2.25, height: 3.75 } as const;
-// Source: TRADE.md §4 — receptacles commonly 12–16 in to the bottom of the box; switches commonly
+// Source: docs/sources.md §4 — receptacles commonly 12–16 in to the bottom of the box; switches commonly
 // 48 in above the finished floor (common practice, not set by the NEC). Used only where a box's
 // height was not given.
 export const OUTLET_BOTTOM = 12;

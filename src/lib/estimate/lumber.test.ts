@@ -4,7 +4,7 @@ import { dressedSize } from './lumber.ts';
 
 describe('dressed lumber sizes', () => {
   // Source: American Softwood Lumber Standard DOC PS 20, minimum dressed dry sizes, as reproduced by
-  // engineeringtoolbox.com "Softwood Lumber - Standard Sizes" and sizes.com (TRADE.md §1).
+  // engineeringtoolbox.com "Softwood Lumber - Standard Sizes" and sizes.com (docs/sources.md §1).
   it.each([
     ['1x2', 0.75, 1.5],
     ['1x3', 0.75, 2.5],
@@ -19,7 +19,7 @@ describe('dressed lumber sizes', () => {
   });
 
   it('lays boards at the dressed width, never the nominal one', () => {
-    // Source: TRADE.md §12 [computed here] — 144 in of 1x6 (5.5 in) with a 1/8 in gap: 26 boards, the last 3-3/8 in.
+    // Source: docs/sources.md §12 [computed here] — 144 in of 1x6 (5.5 in) with a 1/8 in gap: 26 boards, the last 3-3/8 in.
     const run = boardRun(144, dressedSize('1x6').width, 0.125);
     expect(run).toEqual({ count: 26, lastWidth: 3.375, leftover: 0 });
     expect(boardRun(144, 6, 0.125).count).not.toBe(run.count);

@@ -27,7 +27,7 @@ describe('piecesPerSheet', () => {
     expect(piecesPerSheet(SHEET, { width: 4.5, height: 35 }, { rotate: false })).toBe(20);
   });
 
-  // Source: TRADE.md §9 [computed here] — strips from a 48 in width satisfy n·w + (n − 1)·k ≤ 48.
+  // Source: docs/sources.md §9 [computed here] — strips from a 48 in width satisfy n·w + (n − 1)·k ≤ 48.
   it.each([
     [{ width: 6, height: 96 }, 0, 8],
     [{ width: 6, height: 96 }, 0.125, 7],

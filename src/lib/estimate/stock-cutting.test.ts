@@ -39,7 +39,7 @@ describe('stockPiecesNeeded', () => {
     expect(stockPiecesNeeded([], 96)).toBe(0);
     expect(stockPiecesNeeded([96], 96)).toBe(1);
     expect(stockPiecesNeeded([48, 48], 96)).toBe(1);
-    // Source: TRADE.md §9 — kerf is lost at each cut: two 48 in cuts no longer come from one 96 in length.
+    // Source: docs/sources.md §9 — kerf is lost at each cut: two 48 in cuts no longer come from one 96 in length.
     expect(stockPiecesNeeded([48, 48], 96, 0.125)).toBe(2);
     expect(stockPiecesNeeded([47.9375, 47.9375], 96, 0.125)).toBe(1);
   });
@@ -57,18 +57,18 @@ describe('stockPiecesNeeded', () => {
     },
   );
 
-  // Source: AMPL book example cut.dat — stock 110, widths 20/45/50/55/75, orders 48/35/24/10/8; integer optimum 47 (TRADE.md §12, computed there by exact ILP).
+  // Source: AMPL book example cut.dat — stock 110, widths 20/45/50/55/75, orders 48/35/24/10/8; integer optimum 47 (computed by exact ILP; docs/sources.md §12).
   it('meets the optimum 47 on the AMPL cutting-stock example', () => {
     expect(stockPiecesNeeded(repeat([20, 45, 50, 55, 75], [48, 35, 24, 10, 8]), 110)).toBe(47);
   });
 
-  // Source: GAMS model library CUTSTOCK (Gilmore–Gomory) — raw width 100, widths 45/36/31/14, demand 97/610/395/211; integer optimum 453 (TRADE.md §12).
+  // Source: GAMS model library CUTSTOCK (Gilmore–Gomory) — raw width 100, widths 45/36/31/14, demand 97/610/395/211; integer optimum 453 (docs/sources.md §12).
   it('meets the optimum 453 on the GAMS cutstock example', () => {
     expect(stockPiecesNeeded(repeat([45, 36, 31, 14], [97, 610, 395, 211]), 100)).toBe(453);
   });
 
   // Source: Wikipedia "Cutting stock problem" paper-roll example (data rows from memory; total-length bound 72.7 quoted
-  // in a public AMPL file; integer optimum 73 computed in TRADE.md §12). The heuristic must stay within FFD's proven
+  // in a public AMPL file; integer optimum 73 computed here, docs/sources.md §12). The heuristic must stay within FFD's proven
   // bound 11/9·OPT + 6/9 (Dósa 2007) and can never beat the optimum.
   it('stays between the optimum and the FFD bound on the paper-roll example', () => {
     const cuts = repeat([1380, 1520, 1560, 1710, 1820, 1880, 1930, 2000, 2050, 2100, 2140, 2150, 2200], [22, 25, 12, 14, 18, 18, 20, 10, 12, 14, 16, 18, 20]);
@@ -82,7 +82,7 @@ describe('stockPiecesNeeded', () => {
     'never below the total-length bound and the plan is feasible',
     (cuts, kerf) => {
       const n = stockPiecesNeeded(cuts, 96, kerf);
-      // Source: TRADE.md §12 — result ≥ ceil(total length / stock) (property).
+      // Source: docs/sources.md §12 — result ≥ ceil(total length / stock) (property).
       expect(n).toBeGreaterThanOrEqual(Math.ceil(cuts.reduce((s, c) => s + c, 0) / 96 - 1e-9));
       const plan = planStockCuts(cuts, 96, kerf);
       expect(plan.flat().length).toBe(cuts.length);

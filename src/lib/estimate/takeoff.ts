@@ -291,7 +291,7 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
         const x = start + i * (fw + t.frameGap);
         const y = bottom + r * (fh + t.frameGap);
         ctx.pieces.push({ role: 'frame', x, y, width: fw, height: fh });
-        // Source: TRADE.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
+        // Source: docs/sources.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
         for (const side of [fw, fw, fh, fh]) {
           // A side longer than the moulding comes from a longer length the firm lists, or is joined.
           const cut = stockCutFor(lengths, side, moulding.thickness);
@@ -495,7 +495,7 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     capRailFeet,
     baseboardFeet,
     baseboardRemovedFeet,
-    // Source: TRADE.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
+    // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
     // The old baseboard is taken to be as tall as the new one.
     disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,
     panelSqFt,

@@ -8,7 +8,7 @@ describe('unit conversion', () => {
     expect(inchesToMm(1)).toBe(25.4);
     expect(mmToInches(25.4)).toBe(1);
   });
-  // Source: exact from 1 in = 25.4 mm (NIST SP 811): 1 ft = 0.3048 m, 1 ft² = 0.09290304 m²; a 4 × 8 ft sheet is 2.97289728 m² (TRADE.md §13).
+  // Source: exact from 1 in = 25.4 mm (NIST SP 811): 1 ft = 0.3048 m, 1 ft² = 0.09290304 m²; a 4 × 8 ft sheet is 2.97289728 m² (docs/sources.md §13).
   it('a 4 × 8 ft sheet is 2.97289728 m²', () => {
     expect(inchesToMm(12)).toBeCloseTo(304.8, 12);
     expect(sqFtToSqM(32)).toBeCloseTo(2.97289728, 12);

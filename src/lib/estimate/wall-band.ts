@@ -4,7 +4,7 @@ import type { Room, Wall } from './schemas.ts';
 /** Top of the covered band: the wainscot height (one third of the ceiling when not given) or the ceiling. */
 export function bandTopFor(room: Room): number {
   if (room.treatment.height === 'full') return room.ceilingHeight;
-  // Source: TRADE.md §8 — rule of thirds, cap at about one third of the wall height (This Old House).
+  // Source: docs/sources.md §8 — rule of thirds, cap at about one third of the wall height (This Old House).
   return room.treatment.wainscotHeight ?? Math.round(room.ceilingHeight / 3);
 }
 

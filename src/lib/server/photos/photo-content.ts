@@ -11,7 +11,7 @@ import { ACCEPTED_PHOTO_TYPES, PHOTO_LONG_EDGE_PX, PHOTO_MESSAGES } from '~/lib/
 /**
  * Largest decoded image we accept. A small, highly compressible file can decode to gigabytes of
  * pixels; sharp's own default cap is 268 MP. 40 MP is above any phone camera in common use
- * (common practice, no source; QUALITY.md 1.3 proposes 40–50 MP).
+ * (common practice, no source; docs/sources.md §14).
  */
 export const MAX_INPUT_PIXELS = 40_000_000;
 

@@ -18,7 +18,7 @@ function s3(): S3Client {
       forcePathStyle: settings.forcePathStyle,
       credentials: { accessKeyId: settings.accessKeyId, secretAccessKey: settings.secretAccessKey },
       // With the SDK's default checksums, streamed bodies reach s3rver in aws-chunked framing and are
-      // stored corrupted, and presigned URLs carry the checksum of an empty body (STACK.md, section 5).
+      // stored corrupted, and presigned URLs carry the checksum of an empty body (docs/sources.md §15).
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',
     });
