@@ -1,18 +1,9 @@
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import { estimate, EstimateInputError, formatMoney, parseRateBook, projectSchema, sampleProject, sampleRateBook, type ProjectInput } from './index.ts';
+import { fieldsOf } from './input-refusal.testing.ts';
 
 const rateBook = parseRateBook(sampleRateBook());
-
-function fieldsOf(fn: () => unknown): Record<string, string> {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof EstimateInputError) return e.fields;
-    throw e;
-  }
-  throw new Error('expected an EstimateInputError');
-}
 
 function oneWall(length: number, treatment: string, height: 'wainscot' | 'full', extra: Partial<ProjectInput> = {}, outlets = 1): ProjectInput {
   return {

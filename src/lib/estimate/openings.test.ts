@@ -2,6 +2,7 @@
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import { estimate, EstimateInputError, formatLength, sampleRateBook, type ProjectInput } from './index.ts';
+import { fieldsOf } from './input-refusal.testing.ts';
 
 type Openings = ProjectInput['rooms'][number]['walls'][number]['openings'];
 
@@ -11,16 +12,6 @@ function project(walls: Array<{ length: number; openings: Openings }>): ProjectI
     builtBefore1978: 'no',
     measuredBy: 'homeowner-tape',
   };
-}
-
-function fieldsOf(fn: () => unknown): Record<string, string> {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof EstimateInputError) return e.fields;
-    throw e;
-  }
-  throw new Error('expected an EstimateInputError');
 }
 
 describe('counted doors and windows', () => {

@@ -1,30 +1,11 @@
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
-import {
-  checkProjectSize,
-  estimate,
-  EstimateInputError,
-  parseRateBook,
-  PROJECT_LIMITS,
-  projectSize,
-  sampleRateBook,
-  validateProject,
-  type ProjectInput,
-} from './index.ts';
+import { checkProjectSize, estimate, parseRateBook, PROJECT_LIMITS, projectSize, sampleRateBook, validateProject, type ProjectInput } from './index.ts';
 import { biggestAcceptedProject, costliestAcceptedProject, largeHouse, schemaMaximumProject } from './sample-big-projects.ts';
+import { inputRefusal as refusal } from './input-refusal.testing.ts';
 
 const rateBook = parseRateBook(sampleRateBook());
 const run = (p: unknown) => estimate(p, rateBook);
-
-function refusal(fn: () => unknown): EstimateInputError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof EstimateInputError) return e;
-    throw e;
-  }
-  throw new Error('expected an EstimateInputError');
-}
 
 // The limits are well above any real home: common practice, no source (see PROJECT_LIMITS).
 describe('the size of a project is checked before it is computed', () => {
