@@ -2,7 +2,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { createElement } from 'react';
 import { describe, expect, it } from 'vitest';
 import { WallDrawing } from '~/components/drawing/WallDrawing';
-import { estimate, parseRateBook, sampleRateBook, type WallPiece } from '~/lib/estimate';
+import { estimate, parseRateBook, sampleProject, sampleRateBook, type WallPiece } from '~/lib/estimate';
 import { biggestAcceptedProject, largeHouse } from '~/lib/estimate/sample-big-projects';
 import { DRAWN_PIECES_BUDGET, drawingPieces, presentForHomeowner } from '~/lib/server/estimates/present-estimate';
 
@@ -76,5 +76,18 @@ describe("the homeowner's view is sized to what the widget shows", () => {
     // The drawn walls come first, in the order the homeowner listed them.
     expect(walls.findIndex((w) => !w.drawn)).toBe(walls.length - words.length);
     expect(JSON.stringify({ estimate: view }).length).toBeLessThan(450_000);
+  });
+});
+
+describe("the homeowner's materials list", () => {
+  // Demo rate book: the sample project's paint is bought as a mix of containers (containers.ts);
+  // the homeowner reads the mix, not a bare "1 set".
+  it('names the containers paint and primer are bought in', () => {
+    const e = run({ ...sampleProject(), paint: true });
+    const paint = e.takeoff.materials.find((m) => m.id === 'paint')!;
+    const shown = presentForHomeowner(e).materials.find((m) => m.label.startsWith(paint.label))!;
+    expect(paint.packs!.length).toBeGreaterThan(0);
+    expect(shown.label).toMatch(/^Interior trim enamel, eggshell: \d+ (quart|gallon|5-gallon pail)/);
+    expect(shown).toMatchObject({ quantity: 1, unit: 'set' });
   });
 });

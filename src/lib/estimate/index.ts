@@ -48,4 +48,8 @@ export { priceRange } from './pricing.ts';
 export { estimate, estimateParsed } from './estimate.ts';
 export { wallSummary } from './summary.ts';
 export { sampleRateBook, sampleProject } from './sample-data.ts';
+export { cheapestContainers, describePacks, LITRES_PER_US_GALLON } from './containers.ts';
+export type { Container, ContainerChoice, Pack } from './containers.ts';
+export { siteVisits, setupHoursPerVisit, describeVisits } from './site-visits.ts';
+export { paintingLabour } from './painting.ts';
 export type * from './types.ts';

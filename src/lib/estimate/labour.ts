@@ -1,11 +1,18 @@
 /** Labour hours by task: productivity per treatment and time per item, from the rate book. */
 import type { RateBook } from './schemas.ts';
-import type { LabourLine, Takeoff } from './types.ts';
+import { paintingLabour } from './painting.ts';
+import { describeVisits, setupHoursPerVisit, siteVisits } from './site-visits.ts';
+import type { LabourLine, SiteVisits, Takeoff } from './types.ts';
 import { formatArea } from './units.ts';
 
 const r2 = (x: number): number => Math.round(x * 100) / 100;
 
 export function labourFor(takeoff: Takeoff, rateBook: RateBook): LabourLine[] {
+  return labourAndVisits(takeoff, rateBook).lines;
+}
+
+/** Labour lines and the site visits the set-up line was counted from. */
+export function labourAndVisits(takeoff: Takeoff, rateBook: RateBook): { lines: LabourLine[]; visits: SiteVisits } {
   const L = rateBook.labour;
   const units = takeoff.units;
   const lines: LabourLine[] = [];
@@ -69,14 +76,25 @@ export function labourFor(takeoff: Takeoff, rateBook: RateBook): LabourLine[] {
     sum((r) => r.capRailFeet),
     L.hoursPerFootCapRail,
   );
-  if (takeoff.paintSqFt > 0) {
+  // Install days count every hour so far (install, trim, cut-outs); painting comes on its own visits.
+  const installHours = lines.reduce((a, l) => a + l.hours, 0);
+  const painting = paintingLabour(takeoff, rateBook);
+  lines.push(...painting.lines);
+  const visits = siteVisits({
+    installHours,
+    hoursPerDay: L.hoursPerDay,
+    painting: takeoff.facts.paint,
+    primerCoats: painting.primerCoats,
+    paintCoats: painting.paintCoats,
+    setupHoursEach: setupHoursPerVisit(L),
+  });
+  if (visits.total > 0 && visits.setupHoursEach > 0) {
     lines.push({
-      task: 'paint',
-      label: 'Prime and paint',
-      hours: takeoff.paintSqFt / L.paintSqFtPerHour,
-      basis: `${formatArea(takeoff.paintSqFt, units)} ÷ ${L.paintSqFtPerHour} sq ft per hour`,
+      task: 'setup',
+      label: 'Set-up and clean-up',
+      hours: visits.total * visits.setupHoursEach,
+      basis: `${visits.total} ${visits.total === 1 ? 'visit' : 'visits'} × ${visits.setupHoursEach} h (${describeVisits(visits)})`,
     });
   }
-  perItem('setup', 'Set-up and clean-up', takeoff.rooms.length, L.setupHoursPerRoom, takeoff.rooms.length === 1 ? 'room' : 'rooms');
-  return lines;
+  return { lines, visits };
 }

@@ -1,4 +1,5 @@
 /** The materials list: stock pieces from the cut lists, consumables by coverage. */
+import { cheapestContainers, describePacks, LITRES_PER_US_GALLON } from './containers.ts';
 import { beadFeetPerTube, filletFeetPerTube, gallonsFor } from './coverage.ts';
 import type { Catalogue } from './schemas.ts';
 import { piecesPerSheet } from './sheet-layout.ts';
@@ -151,18 +152,28 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
     });
   }
   if (paint) {
-    // Primer and paint are bought the same way: whole gallons for the area, coats and coverage.
+    // Primer and paint are bought the same way: the gallons for the area, coats and coverage, in the
+    // cheapest mix of the containers the rate book lists (only whole gallons when it lists none).
     const coating = (id: 'primer' | 'paint', c: typeof s.paint, sqFt: number): void => {
       if (sqFt <= 0 || c.coats <= 0) return;
       const g = gallonsFor(sqFt, c.coats, c.sqFtPerGallon);
+      const basis = `${formatArea(sqFt, units)} × ${plural(c.coats, 'coat')} ÷ ${c.sqFtPerGallon} sq ft per gallon`;
+      if (!c.containers) {
+        lines.push({ id, label: c.name, quantity: Math.ceil(g - EPS), unit: 'gallon', needed: round2(g), unitCents: c.priceCents, basis });
+        return;
+      }
+      const choice = cheapestContainers(g, c.containers);
+      // Metric firms read volumes in litres; the rate book's sizes stay US gallons. Source: docs/sources.md §25.
+      const vol = (gal: number): string => (units === 'metric' ? `${round2(gal * LITRES_PER_US_GALLON)} L` : `${round2(gal)} gal`);
       lines.push({
         id,
         label: c.name,
-        quantity: Math.ceil(g - EPS),
-        unit: 'gallon',
+        quantity: 1,
+        unit: 'set',
         needed: round2(g),
-        unitCents: c.priceCents,
-        basis: `${formatArea(sqFt, units)} × ${plural(c.coats, 'coat')} ÷ ${c.sqFtPerGallon} sq ft per gallon`,
+        unitCents: choice.totalCents,
+        packs: choice.packs,
+        basis: `${basis} = ${vol(g)}; cheapest containers that cover it: ${describePacks(choice.packs)} (${vol(choice.gallons)})`,
       });
     };
     const primed = rooms.filter((r) => catalogue.treatments.find((t) => t.id === r.treatmentId)?.needsPrimer);

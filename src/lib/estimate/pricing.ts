@@ -1,6 +1,6 @@
 /** Price lines, the total and the range, from a takeoff and the owner's rate book. */
 import { LEAD_MINOR_REPAIR_SQ_FT } from './cautions.ts';
-import { labourFor } from './labour.ts';
+import { labourAndVisits } from './labour.ts';
 import { formatMoney, roundDownTo, roundUpTo } from './money.ts';
 import type { RateBook } from './schemas.ts';
 import type { Price, PriceLine, Takeoff } from './types.ts';
@@ -40,7 +40,7 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
     });
   }
 
-  const labour = labourFor(takeoff, rateBook);
+  const { lines: labour, visits } = labourAndVisits(takeoff, rateBook);
   let labourCents = 0;
   for (const l of labour) {
     const total = Math.round(l.hours * rateBook.labour.rateCents);
@@ -133,6 +133,7 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
     locale: rateBook.locale,
     labour: labour.map((l) => ({ ...l, hours: r2(l.hours) })),
     labourHours: r2(labour.reduce((s, l) => s + l.hours, 0)),
+    visits,
     lines,
     materialsCents,
     markupCents,

@@ -47,8 +47,29 @@ export function sampleRateBook(): RateBookInput {
         adhesive: { name: 'Construction adhesive, 10 fl oz', fluidOunces: 10, bead: 0.25, feetPerSqFt: 0.5, priceCents: 650 },
         caulk: { name: 'Paintable acrylic caulk, 10.1 fl oz', fluidOunces: 10.1, bead: 0.25, priceCents: 450 },
         filler: { name: 'Wood filler, small tub', sqFtPerUnit: 150, priceCents: 800 },
-        primer: { name: 'Stain-blocking primer', sqFtPerGallon: 400, coats: 1, priceCents: 3500 },
-        paint: { name: 'Interior trim enamel, eggshell', sqFtPerGallon: 350, coats: 2, priceCents: 5200 },
+        // Container sizes and prices: invented demo figures.
+        primer: {
+          name: 'Stain-blocking primer',
+          sqFtPerGallon: 400,
+          coats: 1,
+          priceCents: 3500,
+          containers: [
+            { name: 'quart', gallons: 0.25, priceCents: 1400 },
+            { name: 'gallon', gallons: 1, priceCents: 3500 },
+            { name: '5-gallon pail', gallons: 5, priceCents: 15500 },
+          ],
+        },
+        paint: {
+          name: 'Interior trim enamel, eggshell',
+          sqFtPerGallon: 350,
+          coats: 2,
+          priceCents: 5200,
+          containers: [
+            { name: 'quart', gallons: 0.25, priceCents: 1800 },
+            { name: 'gallon', gallons: 1, priceCents: 5200 },
+            { name: '5-gallon pail', gallons: 5, priceCents: 23500 },
+          ],
+        },
         boxExtender: { name: 'Listed box extender', priceCents: 450 },
       },
       treatments: [
@@ -59,6 +80,7 @@ export function sampleRateBook(): RateBookInput {
           enabled: true,
           sqFtPerHour: 18,
           needsPrimer: true,
+          paintFactor: 1.3, // demo value; grooves and edges paint slower than flat faces (common practice, no source)
           orientation: 'vertical',
           source: { from: 'sheet', sheetId: 'ply-4x8-quarter', stripWidth: 5.875 },
           gap: 0.125,
@@ -70,6 +92,7 @@ export function sampleRateBook(): RateBookInput {
           enabled: true,
           sqFtPerHour: 15,
           needsPrimer: true,
+          paintFactor: 1.3, // demo value; grooves and edges paint slower than flat faces (common practice, no source)
           orientation: 'horizontal',
           source: { from: 'boards', boardId: 'shiplap-1x6-8' },
           gap: 0.125,
@@ -81,12 +104,22 @@ export function sampleRateBook(): RateBookInput {
           enabled: true,
           sqFtPerHour: 14,
           needsPrimer: false,
+          paintFactor: 1.2, // demo value; grooves and edges paint slower than flat faces (common practice, no source)
           battenId: 'mdf-1x3-8',
           battenSpacing: 16,
           topRailId: 'mdf-1x4-8',
           backingSheetId: 'mdf-4x8-quarter',
         },
-        { id: 'beadboard', kind: 'beadboard', name: 'Beadboard wainscot', enabled: true, sqFtPerHour: 20, needsPrimer: true, sheetId: 'beadboard-4x8' },
+        {
+          id: 'beadboard',
+          kind: 'beadboard',
+          name: 'Beadboard wainscot',
+          enabled: true,
+          sqFtPerHour: 20,
+          needsPrimer: true,
+          paintFactor: 1.5, // demo value; grooves and edges paint slower than flat faces (common practice, no source)
+          sheetId: 'beadboard-4x8',
+        },
         {
           id: 'flat-panel',
           kind: 'flat-panel',
@@ -94,6 +127,7 @@ export function sampleRateBook(): RateBookInput {
           enabled: true,
           sqFtPerHour: 10,
           needsPrimer: false,
+          paintFactor: 1, // demo value; grooves and edges paint slower than flat faces (common practice, no source)
           stileId: 'mdf-1x4-8',
           railId: 'mdf-1x4-8',
           stileSpacing: 24,
@@ -106,6 +140,7 @@ export function sampleRateBook(): RateBookInput {
           enabled: true,
           sqFtPerHour: 12,
           needsPrimer: true,
+          paintFactor: 1.2, // demo value; grooves and edges paint slower than flat faces (common practice, no source)
           mouldingId: 'frame-moulding',
           margin: 4,
           frameGap: 4,
@@ -124,7 +159,8 @@ export function sampleRateBook(): RateBookInput {
       hoursPerFootBaseboardInstalled: 0.05,
       hoursPerFootCapRail: 0.06,
       paintSqFtPerHour: 80,
-      setupHoursPerRoom: 1,
+      setupHoursPerVisit: 1,
+      hoursPerDay: 8,
     },
     extras: {
       leadSafe: { perJobCents: 25000, perRoomCents: 15000, everyPre1978Job: false },

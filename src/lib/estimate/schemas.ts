@@ -210,6 +210,22 @@ const coatingSchema = (label: string) =>
     sqFtPerGallon: num(`${label} coverage`, 'sq ft per gallon', 50, 1000),
     coats: count(`${label} coats`, 4),
     priceCents: cents(`${label} price per gallon`),
+    /**
+     * The sizes the store sells, each in US gallons at its own price; the cheapest mix that covers is
+     * bought (containers.ts). Left out: the one-gallon price above is the only size.
+     */
+    containers: z
+      .array(
+        z.strictObject({
+          name: text(`${label} container name`, 40),
+          gallons: num(`${label} container size`, 'US gallons', 0.0625, 10),
+          priceCents: cents(`${label} container price`),
+        }),
+        { error: `${label} containers must be a list.` },
+      )
+      .min(1, { error: `List at least one ${label.toLowerCase()} container, or leave the list out.` })
+      .max(6, { error: `At most 6 ${label.toLowerCase()} containers.` })
+      .optional(),
   });
 
 export const suppliesSchema = z.strictObject({
@@ -239,6 +255,8 @@ const treatmentCommon = {
   sqFtPerHour: num('Productivity', 'sq ft per hour', 1, 500),
   /** Whether the material needs a coat of primer before paint (raw wood or MDF). */
   needsPrimer: flag('Needs primer').default(true),
+  /** Painting time relative to a flat face (grooves and gaps take longer): the paint rate is divided by it. */
+  paintFactor: num('Painting factor', '', 0.5, 4).default(1),
 };
 
 export const shiplapSchema = z.strictObject({
@@ -337,7 +355,12 @@ export const rateBookSchema = z
       hoursPerFootBaseboardInstalled: num('Time per foot of baseboard installed', 'hours', 0, 2),
       hoursPerFootCapRail: num('Time per foot of cap rail', 'hours', 0, 2),
       paintSqFtPerHour: num('Painting productivity', 'sq ft per hour', 1, 1000),
-      setupHoursPerRoom: num('Set-up and clean-up per room', 'hours', 0, 24),
+      /** Older rate books charged set-up per room; kept so they still parse, and used when the per-visit figure is missing. */
+      setupHoursPerRoom: num('Set-up and clean-up per room', 'hours', 0, 24).optional(),
+      /** Set-up and clean-up on each site visit (install days, caulk and fill, each coat). */
+      setupHoursPerVisit: num('Set-up and clean-up per visit', 'hours', 0, 24).optional(),
+      /** Working hours in one install day, for counting install visits. */
+      hoursPerDay: num('Working hours per day', 'hours', 1, 24).default(8),
     }),
     extras: z.strictObject({
       leadSafe: z.strictObject({
@@ -364,6 +387,9 @@ export const rateBookSchema = z
     }),
   })
   .superRefine((rb, ctx) => {
+    if (rb.labour.setupHoursPerVisit === undefined && rb.labour.setupHoursPerRoom === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['labour', 'setupHoursPerVisit'], message: 'Set-up and clean-up per visit is required.' });
+    }
     const c = rb.catalogue;
     const sheets = new Set(c.sheets.map((s) => s.id));
     const boards = new Set(c.boards.map((s) => s.id));

@@ -110,7 +110,7 @@ export interface MaterialLine {
   label: string;
   /** Units to buy, after waste and rounding up to whole units. */
   quantity: number;
-  unit: 'sheet' | 'piece' | 'box' | 'tube' | 'gallon' | 'each';
+  unit: 'sheet' | 'piece' | 'box' | 'tube' | 'gallon' | 'each' | 'set';
   /** What the quantity was worked out from, before waste and rounding. */
   needed: number;
   unitCents: number;
@@ -120,6 +120,8 @@ export interface MaterialLine {
   /** For stock lengths: the cuts that come from them. */
   cuts?: number;
   stockLength?: number;
+  /** For paint and primer: the containers bought, largest first (containers.ts). */
+  packs?: Array<{ name: string; gallons: number; priceCents: number; count: number }>;
 }
 
 export interface Caution {
@@ -166,11 +168,23 @@ export interface PriceLine {
   basis: string;
 }
 
+/** The crew's trips to the house (site-visits.ts), each carrying set-up and clean-up. */
+export interface SiteVisits {
+  total: number;
+  installDays: number;
+  /** 1 when the firm paints: caulk and fill before the first coat. */
+  caulkAndFill: number;
+  primerCoats: number;
+  paintCoats: number;
+  setupHoursEach: number;
+}
+
 export interface Price {
   currency: string;
   locale: string;
   labour: LabourLine[];
   labourHours: number;
+  visits?: SiteVisits;
   lines: PriceLine[];
   materialsCents: number;
   markupCents: number;

@@ -101,13 +101,14 @@ const materialLine = z.object({
   id: str,
   label: str,
   quantity: num,
-  unit: z.enum(['sheet', 'piece', 'box', 'tube', 'gallon', 'each']),
+  unit: z.enum(['sheet', 'piece', 'box', 'tube', 'gallon', 'each', 'set']),
   needed: num,
   unitCents: num,
   basis: str,
   piecesPerSheet: num.optional(),
   cuts: num.optional(),
   stockLength: num.optional(),
+  packs: z.array(z.object({ name: str, gallons: num, priceCents: num, count: num })).optional(),
 });
 
 const caution = z.object({
@@ -158,6 +159,7 @@ const price = z.object({
   locale: str,
   labour: z.array(labourLine),
   labourHours: num,
+  visits: z.object({ total: num, installDays: num, caulkAndFill: num, primerCoats: num, paintCoats: num, setupHoursEach: num }).optional(),
   lines: z.array(priceLine),
   materialsCents: num,
   markupCents: num,

@@ -1,4 +1,4 @@
-import type { Estimate, WallPiece, WallTakeoff } from '~/lib/estimate';
+import { describePacks, type Estimate, type WallPiece, type WallTakeoff } from '~/lib/estimate';
 import type { HomeownerEstimate, HomeownerWall } from '~/lib/shared/homeowner-estimate';
 
 export type { HomeownerEstimate };
@@ -77,7 +77,12 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
       netSqFt: room.netSqFt,
       walls: walls[r]!,
     })),
-    materials: takeoff.materials.map((m) => ({ label: m.label, quantity: m.quantity, unit: m.unit })),
+    // Paint bought as a mix of containers reads as the mix ("1 gallon + 2 quarts"), not "1 set".
+    materials: takeoff.materials.map((m) =>
+      m.packs && m.packs.length > 0
+        ? { label: `${m.label}: ${describePacks(m.packs)}`, quantity: 1, unit: 'set' }
+        : { label: m.label, quantity: m.quantity, unit: m.unit },
+    ),
     cautions: takeoff.cautions,
     notes: takeoff.notes,
   };
