@@ -257,6 +257,13 @@ const treatmentCommon = {
   needsPrimer: flag('Needs primer').default(true),
   /** Painting time relative to a flat face (grooves and gaps take longer): the paint rate is divided by it. */
   paintFactor: num('Painting factor', '', 0.5, 4).default(1),
+  /**
+   * How boards, strips and sheets are set out across the wall: from the left end (the last one
+   * ripped to fit) or balanced (both ends ripped to the same width; see balanced-run.ts).
+   */
+  layout: choice('Layout', ['from-left', 'balanced'] as const).default('from-left'),
+  /** Narrowest end board the owner accepts in a balanced layout; common practice, no source (about 1-1/2 in). */
+  minEndWidth: inches('Narrowest end board', 0.25, 12).default(1.5),
 };
 
 export const shiplapSchema = z.strictObject({

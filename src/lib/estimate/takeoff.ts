@@ -2,6 +2,7 @@
  * The takeoff: per wall and per room, the covered band, areas, openings, boxes, board layout, the
  * pieces of material on the wall and the cuts they need; then the project's materials and cautions.
  */
+import { balancedPositions, balancedRun } from './balanced-run.ts';
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
@@ -135,14 +136,30 @@ function boardById(c: Catalogue, id: string): BoardStock {
   return c.boards.find((s) => s.id === id)!;
 }
 
+interface RunPlan {
+  layout: Omit<BoardLayout, 'orientation' | 'boardWidth' | 'gap'>;
+  positions: Array<{ start: number; width: number; ripped: boolean }>;
+}
+
+/** Boards (or sheets) across a run, set out from the left end or balanced, as the treatment says. */
+function runPlan(t: Treatment, runLength: number, width: number, gap: number): RunPlan {
+  if (t.layout === 'balanced') {
+    const run = balancedRun(runLength, width, gap);
+    const positions = balancedPositions(runLength, width, gap).map((p) => ({ ...p, ripped: p.width < width - 1e-6 }));
+    return { layout: { count: run.count, lastWidth: run.endWidth, leftover: 0, firstWidth: run.endWidth }, positions };
+  }
+  const run = boardRun(runLength, width, gap);
+  const positions = boardPositions(runLength, width, gap).map((p, i) => ({ ...p, ripped: i === run.count - 1 && run.lastWidth < width - 1e-6 }));
+  return { layout: run, positions };
+}
+
 /** Panels or backing sheets laid side by side across the wall, full sheet width, butted. */
-function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel'): void {
+function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel', t: Treatment): void {
   const longSide = Math.max(sheet.width, sheet.height);
-  for (const col of boardPositions(ctx.length, sheet.width, 0)) {
+  for (const col of runPlan(t, ctx.length, sheet.width, 0).positions) {
     const slices = columnSlices(ctx, col.start, col.start + col.width);
     for (const sl of slices) {
-      for (const [y0, y1] of sl.spans)
-        ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.width < sheet.width - 1e-6 });
+      for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.ripped });
     }
     // A panel notched around an opening still comes from one piece of the sheet.
     for (const [y0, y1] of columnCuts(slices)) {
@@ -167,19 +184,19 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
     cut(len);
   };
   if (t.orientation === 'vertical') {
-    const run = boardRun(ctx.length, faceWidth, t.gap);
-    boardPositions(ctx.length, faceWidth, t.gap).forEach((b, i) => {
-      const ripped = i === run.count - 1 && run.lastWidth < faceWidth - 1e-6;
+    const plan = runPlan(t, ctx.length, faceWidth, t.gap);
+    plan.positions.forEach((b) => {
+      const ripped = b.ripped;
       const slices = columnSlices(ctx, b.start, b.start + b.width);
       for (const sl of slices) for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped });
       for (const [y0, y1] of columnCuts(slices)) for (const len of splitFull(y1 - y0, maxLen)) cut(len);
     });
-    return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...run };
+    return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
   }
   const height = ctx.bandTop - ctx.bandBottom;
-  const run = boardRun(height, faceWidth, t.gap);
-  boardPositions(height, faceWidth, t.gap).forEach((b, i) => {
-    const ripped = i === run.count - 1 && run.lastWidth < faceWidth - 1e-6;
+  const plan = runPlan(t, height, faceWidth, t.gap);
+  plan.positions.forEach((b) => {
+    const ripped = b.ripped;
     const y = ctx.bandBottom + b.start;
     for (const [x0, x1] of rowIntervals(ctx, y, y + b.width)) {
       let x = x0;
@@ -189,7 +206,7 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
       }
     }
   });
-  return { orientation: 'horizontal', boardWidth: faceWidth, gap: t.gap, ...run };
+  return { orientation: 'horizontal', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
 }
 
 /**
@@ -350,10 +367,10 @@ function wallTakeoff(
       boards = layShiplap(ctx, t);
       break;
     case 'beadboard':
-      layPanels(ctx, sheetById(catalogue, t.sheetId), 'panel');
+      layPanels(ctx, sheetById(catalogue, t.sheetId), 'panel', t);
       break;
     case 'board-and-batten': {
-      if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel');
+      if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel', t);
       const rail = t.topRailId ? boardById(catalogue, t.topRailId) : undefined;
       const top = rail ? bandTop - rail.width : bandTop;
       layUprights(ctx, boardById(catalogue, t.battenId), t.battenSpacing, bandBottom, top, 'batten');
@@ -362,7 +379,7 @@ function wallTakeoff(
       break;
     }
     case 'flat-panel': {
-      if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel');
+      if (t.backingSheetId) layPanels(ctx, sheetById(catalogue, t.backingSheetId), 'panel', t);
       const rail = boardById(catalogue, t.railId);
       // The bottom rail's bottom edge is the new baseboard's top joint when that is counted; the top
       // rail's top edge is the cap rail's bottom edge (or the ceiling joint).
@@ -404,9 +421,14 @@ function wallTakeoff(
     ctx.caulkFeet += (2 * v + across) / 12;
   }
 
-  if (boards && boards.lastWidth < 1 && boards.count > 1) {
+  if (boards && boards.firstWidth === undefined && boards.lastWidth < 1 && boards.count > 1) {
     notes.push(
       `The last board on ${label} is ripped to ${formatLength(boards.lastWidth, units)}; splitting the difference between the first and last boards looks better (common practice).`,
+    );
+  }
+  if (boards && boards.firstWidth !== undefined && boards.count > 1 && boards.firstWidth < t.minEndWidth - 1e-9) {
+    notes.push(
+      `${label}: even balanced, the end boards are ${formatLength(boards.firstWidth, units)} wide, narrower than the ${formatLength(t.minEndWidth, units)} the firm accepts; a wider board, or trim at the corners, would hide it.`,
     );
   }
   if (boards && boards.leftover > 0) {

@@ -49,6 +49,8 @@ export interface BoardLayout {
   count: number;
   lastWidth: number;
   leftover: number;
+  /** Width of the first board when it is ripped too (a balanced layout: the same as the last). */
+  firstWidth?: number;
 }
 
 export interface WallTakeoff {

@@ -47,6 +47,7 @@ const boardLayout = z.object({
   count: num,
   lastWidth: num,
   leftover: num,
+  firstWidth: num.optional(),
 });
 
 const wallTakeoff = z.object({
