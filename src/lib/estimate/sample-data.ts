@@ -13,6 +13,7 @@ export function sampleRateBook(): RateBookInput {
     locale: 'en-US',
     catalogue: {
       wasteFactor: 0.1,
+      defectAllowance: 0.02,
       kerf: 0.125,
       trimEndAllowance: 1,
       sheets: [

@@ -304,6 +304,11 @@ export const treatmentSchema = z.discriminatedUnion('kind', [shiplapSchema, boar
 export const catalogueSchema = z.strictObject({
   /** Fraction added to field material (sheets, boards, mouldings) for offcuts, defects and mistakes. */
   wasteFactor: fraction('Waste factor', 0.5),
+  /**
+   * Fraction added for defects to quantities that come from an exact cutting layout (which get no waste
+   * factor: their offcuts are already counted). Estimated quantities keep the waste factor. Default 0.
+   */
+  defectAllowance: fraction('Defect allowance', 0.5).default(0),
   /** Saw kerf lost at each cut. */
   kerf: inches('Saw kerf', 0, 0.5),
   /** Added to each end of a cap rail or baseboard cut for miters and fitting. */
