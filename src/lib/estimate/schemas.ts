@@ -309,6 +309,8 @@ export const catalogueSchema = z.strictObject({
    * factor: their offcuts are already counted). Estimated quantities keep the waste factor. Default 0.
    */
   defectAllowance: fraction('Defect allowance', 0.5).default(0),
+  /** Stud spacing on centre, for joints in horizontal boards and rails: 16 in unless given (docs/sources.md §45). */
+  studSpacing: inches('Stud spacing', 12, 24).default(16),
   /** Saw kerf lost at each cut. */
   kerf: inches('Saw kerf', 0, 0.5),
   /** Added to each end of a cap rail or baseboard cut for miters and fitting. */
