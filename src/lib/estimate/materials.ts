@@ -1,4 +1,5 @@
 /** The materials list: stock pieces from the cut lists, consumables by coverage. */
+import { bradLines } from './brad-sizes.ts';
 import { beadFeetPerTube, filletFeetPerTube, gallonsFor } from './coverage.ts';
 import type { Catalogue } from './schemas.ts';
 import { piecesPerSheet } from './sheet-layout.ts';
@@ -109,7 +110,9 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
   const netSqFt = sum((r) => r.netSqFt);
 
   const brads = panelSqFt * s.brads.perSqFt + trimFeet * s.brads.perFootOfTrim;
-  if (brads > 0) {
+  // With brad sizes listed, one line per size used, each fixing taking the size it needs.
+  if (s.brads.sizes.length > 0) lines.push(...bradLines(rooms, catalogue, units));
+  else if (brads > 0) {
     lines.push({
       id: 'brads',
       label: s.brads.name,

@@ -219,6 +219,22 @@ export const suppliesSchema = z.strictObject({
     perSqFt: num('Brads per sq ft of panelling', '', 0, 20),
     perFootOfTrim: num('Brads per foot of trim', '', 0, 20),
     priceCents: cents('Brad box price'),
+    /**
+     * Brad lengths the firm stocks. Each fixing takes the shortest that is long enough for it
+     * (brad-sizes.ts); without a list, the brad above is used for everything.
+     */
+    sizes: z
+      .array(
+        z.strictObject({
+          name: text('Brad size name', 80),
+          length: inches('Brad length', 0.25, 4),
+          perBox: count('Brads per box', 100_000).min(1, { error: 'Brads per box must be at least 1.' }),
+          priceCents: cents('Brad box price'),
+        }),
+        { error: 'Brad sizes must be a list.' },
+      )
+      .max(10, { error: 'At most 10 brad sizes.' })
+      .default([]),
   }),
   adhesive: tubeSchema('Adhesive').extend({
     /** House rule for how much bead goes behind each square foot of boards or sheets. */
