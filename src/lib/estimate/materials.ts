@@ -1,12 +1,14 @@
 /** The materials list: stock pieces from the cut lists, consumables by coverage. */
+import { bradLines } from './brad-sizes.ts';
 import { cheapestContainers, describePacks, LITRES_PER_US_GALLON } from './containers.ts';
 import { beadFeetPerTube, filletFeetPerTube, gallonsFor } from './coverage.ts';
 import type { Catalogue } from './schemas.ts';
 import { piecesPerSheet } from './sheet-layout.ts';
-import { stockPiecesNeeded } from './stock-cutting.ts';
+import { EXACT_LIMIT, stockPiecesSolved } from './stock-cutting.ts';
 import { stockLengthsOf, type StockLength } from './stock-lengths.ts';
 import type { MaterialLine, RoomTakeoff } from './types.ts';
 import { formatArea, formatLength, type Units } from './units.ts';
+import { estimatedQuantity, exactQuantity, sheetQuantity, type Allowances } from './waste-rule.ts';
 
 /** Everything the walls need cut, gathered across the project so offcuts are shared between rooms. */
 export interface CutRegistry {
@@ -23,7 +25,6 @@ export function lengthKey(stock: { id: string; length: number }, stockLength = s
 
 const EPS = 1e-9;
 const round2 = (x: number): number => Math.round(x * 100) / 100;
-const withWaste = (needed: number, waste: number): number => Math.ceil(needed * (1 + waste) - EPS);
 const pct = (f: number): string => `${round2(f * 100)} %`;
 const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
 
@@ -51,23 +52,30 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
   const lines: MaterialLine[] = [];
   const waste = catalogue.wasteFactor;
   const len = (x: number): string => formatLength(x, units);
-  const wasteText = waste > 0 ? `, plus ${pct(waste)} waste` : '';
+  const allowances: Allowances = { waste, defect: catalogue.defectAllowance };
+  const estimateWaste = Math.max(waste, catalogue.defectAllowance);
+  const exactText = `, an exact layout so no waste is added${catalogue.defectAllowance > 0 ? `, plus ${pct(catalogue.defectAllowance)} for defects` : ''}`;
+  const estimateText = (why: string): string => `, ${why}${estimateWaste > 0 ? `, plus ${pct(estimateWaste)} waste` : ''}`;
 
   for (const sheet of catalogue.sheets) {
     const pieces = reg.sheets.get(sheet.id);
     if (!pieces || pieces.length === 0) continue;
     const { sheets, groups } = sheetsForPieces(sheet, pieces, catalogue.kerf);
+    const counted = sheetQuantity(groups, allowances);
+    const rule = estimateText(
+      counted.partSizes > 1 ? `${counted.partSizes} sizes share part-filled sheets (estimated)` : 'sheet layouts per piece size (estimated)',
+    );
     const shown = groups.slice(0, 3).map((g) => `${g.count} × ${len(g.width)} × ${len(g.height)} at ${g.perSheet} per sheet`);
     const more = groups.length > 3 ? ` and ${plural(groups.length - 3, 'other size')}` : '';
     lines.push({
       id: `sheet:${sheet.id}`,
       label: sheet.name,
-      quantity: withWaste(sheets, waste),
+      quantity: counted.quantity,
       unit: 'sheet',
       needed: round2(sheets),
       unitCents: sheet.priceCents,
       piecesPerSheet: groups[0]!.perSheet,
-      basis: `${shown.join('; ')}${more} (saw kerf ${len(catalogue.kerf)}) = ${round2(sheets)} sheets${wasteText}`,
+      basis: `${shown.join('; ')}${more} (saw kerf ${len(catalogue.kerf)}) = ${round2(sheets)} sheets${rule}`,
     });
   }
 
@@ -77,18 +85,20 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
         const cuts = reg.lengths.get(lengthKey(stock, bought.length));
         if (!cuts || cuts.length === 0) continue;
         const main = bought.length === stock.length;
-        const needed = stockPiecesNeeded(cuts, bought.length, catalogue.kerf);
+        const solved = stockPiecesSolved(cuts, bought.length, catalogue.kerf);
+        const needed = solved.count;
+        const rule = solved.exact ? exactText : estimateText(cuts.length > EXACT_LIMIT ? `estimated (over ${EXACT_LIMIT} cuts)` : 'estimated');
         const total = cuts.reduce((s, c) => s + c, 0);
         lines.push({
           id: main ? `${prefix}:${stock.id}` : `${prefix}:${stock.id}@${bought.length}`,
           label: main ? stock.name : `${stock.name}, in ${len(bought.length)} lengths`,
-          quantity: withWaste(needed, waste),
+          quantity: solved.exact ? exactQuantity(needed, allowances) : estimatedQuantity(needed, allowances),
           unit: 'piece',
           needed,
           unitCents: bought.priceCents,
           cuts: cuts.length,
           stockLength: bought.length,
-          basis: `${plural(cuts.length, 'cut')} totalling ${len(total)} from ${len(bought.length)} lengths (saw kerf ${len(catalogue.kerf)}) = ${plural(needed, 'length')}${wasteText}`,
+          basis: `${plural(cuts.length, 'cut')} totalling ${len(total)} from ${len(bought.length)} lengths (saw kerf ${len(catalogue.kerf)}) = ${plural(needed, 'length')}${rule}`,
         });
       }
     }
@@ -103,7 +113,9 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
   const netSqFt = sum((r) => r.netSqFt);
 
   const brads = panelSqFt * s.brads.perSqFt + trimFeet * s.brads.perFootOfTrim;
-  if (brads > 0) {
+  // With brad sizes listed, one line per size used, each fixing taking the size it needs.
+  if (s.brads.sizes.length > 0) lines.push(...bradLines(rooms, catalogue, units));
+  else if (brads > 0) {
     lines.push({
       id: 'brads',
       label: s.brads.name,

@@ -26,7 +26,10 @@ describe('the size of a project is checked before it is computed', () => {
   });
 
   it('counts the pieces a room would take, and refuses a room of too many', () => {
-    // One 100 ft wall under a 10 ft ceiling in 1 in strips: (120 − 5.25) / 1 → 115 rows of 13 pieces.
+    // One 100 ft wall under a 10 ft ceiling in 1 in strips: (120 − 5.25) / 1 → 115 rows. Joints on studs
+    // 16 in apart and staggered (docs/sources.md §45) make pieces no shorter than max(96 / 2, 96 − 2 × 16)
+    // = 64 in before a row's last, so the bound is ceil(1200 / 64) = 19 pieces a row (was 1200 / 96 → 13).
+    // Computed here: 6 walls × (115 × 19 + 2) = 6 × 2187 = 13,122.
     const rb = sampleRateBook();
     const t = rb.catalogue.treatments.find((x) => x.id === 'shiplap-vertical-ply')!;
     Object.assign(t, { orientation: 'horizontal', source: { from: 'sheet', sheetId: 'ply-4x8-quarter', stripWidth: 1 }, gap: 0 });
@@ -39,10 +42,10 @@ describe('the size of a project is checked before it is computed', () => {
     };
     const p: ProjectInput = { rooms: [room], builtBefore1978: 'no', measuredBy: 'homeowner-tape' };
     const size = projectSize(validateProject(p, parsed.catalogue), parsed.catalogue);
-    expect(size.rooms[0]!.pieces).toBe(6 * (115 * 13 + 2));
+    expect(size.rooms[0]!.pieces).toBe(6 * (115 * 19 + 2));
     const e = refusal(() => estimate(p, parsed));
     expect(e.fields).toEqual({
-      'rooms.0.walls': expect.stringMatching(/would take about 8,982 boards and pieces; an online estimate lays out at most 8,000 in one room/),
+      'rooms.0.walls': expect.stringMatching(/would take about 13,122 boards and pieces; an online estimate lays out at most 8,000 in one room/),
     });
   });
 

@@ -7,6 +7,7 @@
 import { EstimateInputError } from './errors.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW } from './geometry.ts';
 import type { Catalogue, Project, Room, Treatment } from './schemas.ts';
+import { shortestJoinedPiece } from './staggered-joints.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
 /**
@@ -93,7 +94,7 @@ function wallPieces(room: Room, length: number, openings: Array<{ width: number;
   };
   const rail = (id: string | undefined): void => {
     const b = id ? board(id) : undefined;
-    if (b) pieces += ceilDiv(length, b.length) + 1 + k;
+    if (b) pieces += ceilDiv(length, shortestJoinedPiece(b.length, c.studSpacing)) + 1 + k;
   };
   switch (t.kind) {
     case 'shiplap': {
@@ -108,7 +109,8 @@ function wallPieces(room: Room, length: number, openings: Array<{ width: number;
               height,
               pitch,
               length,
-              stock,
+              // Joints on studs, staggered: pieces can be shorter than the stock (staggered-joints.ts).
+              shortestJoinedPiece(stock, c.studSpacing),
               openings.map((o) => o.height),
             )
           : coursePieces(

@@ -13,6 +13,7 @@ export function sampleRateBook(): RateBookInput {
     locale: 'en-US',
     catalogue: {
       wasteFactor: 0.1,
+      defectAllowance: 0,
       kerf: 0.125,
       trimEndAllowance: 1,
       sheets: [
@@ -43,7 +44,20 @@ export function sampleRateBook(): RateBookInput {
       baseboardId: 'base-5',
       capRailId: 'cap-rail',
       supplies: {
-        brads: { name: '18-gauge brads, box of 1000', perBox: 1000, perSqFt: 2.5, perFootOfTrim: 1.5, priceCents: 900 },
+        brads: {
+          name: '18-gauge brads, box of 1000',
+          perBox: 1000,
+          perSqFt: 2.5,
+          perFootOfTrim: 1.5,
+          priceCents: 900,
+          sizes: [
+            { name: '18-gauge brads, 1 in, box of 1000', length: 1, perBox: 1000, priceCents: 700 },
+            { name: '18-gauge brads, 1-1/4 in, box of 1000', length: 1.25, perBox: 1000, priceCents: 750 },
+            { name: '18-gauge brads, 2 in, box of 1000', length: 2, perBox: 1000, priceCents: 900 },
+            { name: '18-gauge brads, 2-1/8 in, box of 1000', length: 2.125, perBox: 1000, priceCents: 950 },
+            { name: '16-gauge finish nails, 2-1/2 in, box of 1000', length: 2.5, perBox: 1000, priceCents: 1100 },
+          ],
+        },
         adhesive: { name: 'Construction adhesive, 10 fl oz', fluidOunces: 10, bead: 0.25, feetPerSqFt: 0.5, priceCents: 650 },
         caulk: { name: 'Paintable acrylic caulk, 10.1 fl oz', fluidOunces: 10.1, bead: 0.25, priceCents: 450 },
         filler: { name: 'Wood filler, small tub', sqFtPerUnit: 150, priceCents: 800 },

@@ -235,6 +235,22 @@ export const suppliesSchema = z.strictObject({
     perSqFt: num('Brads per sq ft of panelling', '', 0, 20),
     perFootOfTrim: num('Brads per foot of trim', '', 0, 20),
     priceCents: cents('Brad box price'),
+    /**
+     * Brad lengths the firm stocks. Each fixing takes the shortest that is long enough for it
+     * (brad-sizes.ts); without a list, the brad above is used for everything.
+     */
+    sizes: z
+      .array(
+        z.strictObject({
+          name: text('Brad size name', 80),
+          length: inches('Brad length', 0.25, 4),
+          perBox: count('Brads per box', 100_000).min(1, { error: 'Brads per box must be at least 1.' }),
+          priceCents: cents('Brad box price'),
+        }),
+        { error: 'Brad sizes must be a list.' },
+      )
+      .max(10, { error: 'At most 10 brad sizes.' })
+      .default([]),
   }),
   adhesive: tubeSchema('Adhesive').extend({
     /** House rule for how much bead goes behind each square foot of boards or sheets. */
@@ -329,6 +345,13 @@ export const treatmentSchema = z.discriminatedUnion('kind', [shiplapSchema, boar
 export const catalogueSchema = z.strictObject({
   /** Fraction added to field material (sheets, boards, mouldings) for offcuts, defects and mistakes. */
   wasteFactor: fraction('Waste factor', 0.5),
+  /**
+   * Fraction added for defects to quantities that come from an exact cutting layout (which get no waste
+   * factor: their offcuts are already counted). Estimated quantities keep the waste factor. Default 0.
+   */
+  defectAllowance: fraction('Defect allowance', 0.5).default(0),
+  /** Stud spacing on centre, for joints in horizontal boards and rails: 16 in unless given (docs/sources.md §45). */
+  studSpacing: inches('Stud spacing', 12, 24).default(16),
   /** Saw kerf lost at each cut. */
   kerf: inches('Saw kerf', 0, 0.5),
   /** Added to each end of a cap rail or baseboard cut for miters and fitting. */

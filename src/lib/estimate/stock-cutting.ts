@@ -50,8 +50,11 @@ function firstFitDecreasing(sizes: number[], cap: number): number[][] {
   return bins;
 }
 
-/** Exact minimum number of bins for a short list (sizes already kerf-grown), or null if the search gave up. */
-function exactBins(sizes: number[], cap: number, upper: number): number[][] | null {
+/**
+ * Exact minimum number of bins for a short list (sizes already kerf-grown), or null if no layout beats
+ * `upper` (then `upper` is the minimum) or the search gave up (then `status.gaveUp` is set).
+ */
+function exactBins(sizes: number[], cap: number, upper: number, status?: { gaveUp: boolean }): number[][] | null {
   const order = sizes.map((_, i) => i).sort((a, b) => sizes[b]! - sizes[a]!);
   const total = sizes.reduce((s, x) => s + x, 0);
   const lower = Math.max(1, Math.ceil(total / cap - EPS));
@@ -97,6 +100,7 @@ function exactBins(sizes: number[], cap: number, upper: number): number[][] | nu
     }
   };
   dfs(0);
+  if (status) status.gaveUp = gaveUp;
   if (gaveUp && bestAssign === null) return null;
   if (bestAssign === null) return null;
   const bins: number[][] = Array.from({ length: best }, () => []);
@@ -186,14 +190,25 @@ export function planStockCuts(cuts: number[], stockLength: number, kerf = 0): nu
  * Exact up to 20 cuts (branch and bound); beyond, a proven heuristic (see module note).
  */
 export function stockPiecesNeeded(cuts: number[], stockLength: number, kerf = 0): number {
+  return stockPiecesSolved(cuts, stockLength, kerf).count;
+}
+
+/**
+ * `stockPiecesNeeded` with how the count was found: `exact` when the branch and bound finished (up to
+ * EXACT_LIMIT cuts), so the count is the true minimum; false when a heuristic answered (more cuts, or
+ * the search hit its node cap), so the count may be above the minimum.
+ */
+export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0): { count: number; exact: boolean } {
   check(cuts, stockLength, kerf);
-  if (cuts.length === 0) return 0;
+  if (cuts.length === 0) return { count: 0, exact: true };
   const sizes = cuts.map((c) => c + kerf);
   const cap = stockLength + kerf;
   const ffd = firstFitDecreasing(sizes, cap).length;
   if (cuts.length <= EXACT_LIMIT) {
-    const exact = exactBins(sizes, cap, ffd);
-    return exact ? exact.length : ffd;
+    const status = { gaveUp: false };
+    const exact = exactBins(sizes, cap, ffd, status);
+    // No layout beat first fit and the search finished: first fit's count is the minimum.
+    return { count: exact ? exact.length : ffd, exact: !status.gaveUp };
   }
-  return Math.min(ffd, sequentialPatterns(sizes, cap));
+  return { count: Math.min(ffd, sequentialPatterns(sizes, cap)), exact: false };
 }

@@ -10,6 +10,7 @@ import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
 import type { BoardLayout, PlacedOpening, RoomTakeoff, Takeoff, WallPiece, WallTakeoff } from './types.ts';
 import { stockCutFor, stockLengthsOf } from './stock-lengths.ts';
+import { staggeredRow } from './staggered-joints.ts';
 import { formatLength, type Units } from './units.ts';
 import { checkProjectSize } from './project-size.ts';
 import { validateProject } from './validate.ts';
@@ -195,16 +196,22 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
   }
   const height = ctx.bandTop - ctx.bandBottom;
   const plan = runPlan(t, height, faceWidth, t.gap);
+  // Joints on studs, clear of the joints in the row below (staggered-joints.ts).
+  let below: number[] = [];
   plan.positions.forEach((b) => {
     const ripped = b.ripped;
     const y = ctx.bandBottom + b.start;
+    const joints: number[] = [];
     for (const [x0, x1] of rowIntervals(ctx, y, y + b.width)) {
+      const row = staggeredRow({ x0, x1, stock: maxLen, studSpacing: ctx.catalogue.studSpacing, below });
+      joints.push(...row.joints);
       let x = x0;
-      for (const len of splitFull(x1 - x0, maxLen)) {
-        put(x, y, len, b.width, len, ripped);
+      for (const len of row.pieces) {
+        if (len >= MIN_PIECE) put(x, y, len, b.width, len, ripped);
         x += len;
       }
     }
+    below = joints;
   });
   return { orientation: 'horizontal', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
 }
@@ -268,7 +275,12 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
 function layRail(ctx: WallContext, board: BoardStock, y: number, edgesToCaulk: 1 | 2 = 2): void {
   for (const [x0, x1] of rowIntervals(ctx, y, y + board.width)) {
     let x = x0;
-    for (const len of splitFull(x1 - x0, board.length)) {
+    // A rail longer than the stock is joined on a stud (staggered-joints.ts).
+    for (const len of staggeredRow({ x0, x1, stock: board.length, studSpacing: ctx.catalogue.studSpacing }).pieces) {
+      if (len < MIN_PIECE) {
+        x += len;
+        continue;
+      }
       ctx.pieces.push({ role: 'rail', x, y, width: len, height: board.width });
       addCuts(ctx.reg.lengths, board.id, [len]);
       ctx.trimFeet += len / 12;
