@@ -231,7 +231,7 @@ test('with the policy on, every island hydrates and the browser refuses nothing'
   await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible();
 
   await page.goto(await homeownerLink());
-  await expect(page.getByRole('heading', { name: /Your ballpark from/ })).toBeVisible();
+  await expect(page.getByRole('heading', { name: /Your price estimate from/ })).toBeVisible();
 
   await page.goto('/reset');
   await page.goto('/login');

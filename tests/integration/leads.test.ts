@@ -99,7 +99,7 @@ describe('sending a lead', () => {
     // Back up, and the retry is due: delivered exactly once.
     await orm.em.fork().nativeUpdate(OutboxMail, { toAddress: request.contact.email }, { nextAttemptAt: new Date(Date.now() - 1000) });
     await deliverMatchingMail(orm.em.fork(), ownMail);
-    const mail = await waitForMail({ to: request.contact.email, subject: 'Your ballpark estimate' });
+    const mail = await waitForMail({ to: request.contact.email, subject: 'Your price estimate' });
     expect(mail.text).toContain(lead.reference);
     expect(await mailTo(request.contact.email)).toHaveLength(1);
   });

@@ -33,7 +33,7 @@ export function homeownerConfirmation(company: Company, lead: LeadFacts, view: H
   const text = [
     `Hello ${lead.name},`,
     '',
-    `Thank you for asking ${company.name} about your walls. Your ballpark price range is ${view.range.text}.`,
+    `Thank you for asking ${company.name} about your walls. Your price range is ${view.range.text}.`,
     view.rangeReason,
     '',
     'Your rooms:',
@@ -51,7 +51,7 @@ export function homeownerConfirmation(company: Company, lead: LeadFacts, view: H
   ].join('\n');
   const html = `<div style="font-family:'DM Sans',Arial,sans-serif;color:#1F2A2E;max-width:560px">
 <p>Hello ${escapeHtml(lead.name)},</p>
-<p>Thank you for asking ${escapeHtml(company.name)} about your walls. Your ballpark price range is</p>
+<p>Thank you for asking ${escapeHtml(company.name)} about your walls. Your price range is</p>
 <p style="font-size:24px;font-weight:700;margin:8px 0">${escapeHtml(view.range.text)}</p>
 <p style="color:#5B6B73">${escapeHtml(view.rangeReason)}</p>
 <h3>Your rooms</h3><ul>${view.rooms.map((r) => `<li>${escapeHtml(r.name)}: ${escapeHtml(r.treatmentName)}, ${r.height === 'full' ? 'full height' : 'wainscot height'}, about ${Math.round(r.netSqFt)} sq ft</li>`).join('')}</ul>
@@ -60,7 +60,7 @@ ${view.cautions.length ? `<h3>Good to know before the work starts</h3><ul>${view
 <p>${escapeHtml(company.name)} will be in touch by ${escapeHtml(lead.preferredContact)} to arrange a site visit. Your reference is <strong>${escapeHtml(lead.reference)}</strong>.</p>
 <p><a href="${escapeHtml(viewUrl)}" style="color:#2F6B4F">See your estimate again</a></p>
 </div>`;
-  return { subject: `Your ballpark estimate from ${company.name}: ${view.range.text}`, text, html };
+  return { subject: `Your price estimate from ${company.name}: ${view.range.text}`, text, html };
 }
 
 /** The firm's new-lead alert, linking to the lead in the staff area. */

@@ -16,7 +16,7 @@ const loadPhotoPicker = () => import('./PhotoPicker');
 const ContactStep = lazy(() => loadContactStep().then((module) => ({ default: module.ContactStep })));
 const PhotoPicker = lazy(loadPhotoPicker);
 
-export type BallparkWidgetProps = {
+export type PriceWidgetProps = {
   slug: string;
   formToken: string;
   firmName: string;
@@ -31,7 +31,7 @@ const STEPS = [
   { id: 'treatment', title: 'Treatment and height' },
   { id: 'options', title: 'A few details' },
   { id: 'photos', title: 'Photos' },
-  { id: 'result', title: 'Your ballpark' },
+  { id: 'result', title: 'Your price range' },
   { id: 'contact', title: 'Your details' },
 ] as const;
 
@@ -56,7 +56,7 @@ function useReportHeight(hostOrigin: string | null) {
   }, [hostOrigin]);
 }
 
-export default function BallparkWidget({ slug, formToken, firmName, units, treatments, hostOrigin }: BallparkWidgetProps) {
+export default function PriceWidget({ slug, formToken, firmName, units, treatments, hostOrigin }: PriceWidgetProps) {
   const [draft, setDraft] = useState<Draft>(() => ({ ...newDraft(units), treatmentId: treatments.length === 1 ? treatments[0]!.id : null }));
   const [step, setStep] = useState(0);
   const [photos, setPhotos] = useState<{ id: string; thumbnailUrl: string }[]>([]);
@@ -132,7 +132,7 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
           Thank you — it's on its way to {firmName}
         </h2>
         <p>
-          Your reference is <strong className="figures">{sent.lead.reference}</strong>. We've sent a copy of your ballpark to your e-mail.
+          Your reference is <strong className="figures">{sent.lead.reference}</strong>. We've sent a copy of your price range to your e-mail.
           {` ${firmName}`} will be in touch to arrange a visit to measure.
         </p>
         {sent.estimate && <p className="figures text-xl font-bold">{sent.estimate.range.text}</p>}
@@ -217,7 +217,7 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
         <div className="fixed inset-x-0 bottom-0 border-t border-slate/30 bg-paper/95 px-4 py-3 text-center" aria-live="polite" data-testid="live-range">
           {estimate ? (
             <>
-              <span className="text-sm text-slate">Ballpark so far: </span>
+              <span className="text-sm text-slate">Price range so far: </span>
               <span className="figures text-lg font-bold">{estimate.range.text}</span>
             </>
           ) : (

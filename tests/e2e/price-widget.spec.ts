@@ -59,7 +59,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await expect(photoList.getByText('Added.', { exact: true })).toHaveCount(2, { timeout: 30_000 });
   await widget.getByRole('button', { name: 'Next' }).click();
 
-  await expect(widget.getByRole('heading', { name: 'Your ballpark', exact: true })).toBeVisible();
+  await expect(widget.getByRole('heading', { name: 'Your price range', exact: true })).toBeVisible();
   await expect(widget.getByTestId('result-range')).toHaveAttribute('aria-busy', 'false');
   const range = (await widget.getByTestId('result-range').textContent())!.trim();
   expect(range).toMatch(/^\$[\d,]+ – \$[\d,]+$/);
@@ -121,7 +121,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   expect(photoRows.some((row) => row.height > row.width)).toBe(true);
 
   // Both e-mails arrive with the same range the homeowner saw.
-  const confirmation = await waitForMail({ to: email, subject: 'Your ballpark estimate', timeoutMs: 15_000 });
+  const confirmation = await waitForMail({ to: email, subject: 'Your price estimate', timeoutMs: 15_000 });
   expect(confirmation.text).toContain(range);
   expect(confirmation.text).toContain(reference);
   const alert = await waitForMail({ to: 'olive@cedar-hollow.test', subject: reference, timeoutMs: 15_000 });
