@@ -47,7 +47,14 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await widget.getByRole('button', { name: 'Next' }).click();
 
   await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
+  // "Built before 1978" starts unanswered: going on without it is refused beside the question.
+  await expect(widget.getByRole('radio', { name: 'Not sure' })).not.toBeChecked();
+  await expect(widget.getByRole('radio', { name: 'No', exact: true }).nth(2)).not.toBeChecked();
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await expect(widget.getByRole('group', { name: /built before 1978/ })).toContainText('Choose yes, no or not sure');
+  await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
   await widget.getByText('Not sure').click();
+  await expect(widget.getByText('Choose yes, no or not sure')).toHaveCount(0);
   await widget.getByRole('button', { name: 'Next' }).click();
 
   await expect(widget.getByRole('heading', { name: 'Photos', exact: true })).toBeVisible();

@@ -32,6 +32,11 @@ test('every step of the widget passes axe at WCAG 2.2 AA on a 320 px wide phone,
 
   await page.getByRole('button', { name: 'Next' }).click();
   await expectNoViolations(page, 'options');
+  // Going on without answering "built before 1978" shows its message, which axe checks too.
+  await page.getByRole('button', { name: 'Next' }).click();
+  await expect(page.getByText('Choose yes, no or not sure')).toBeVisible();
+  await expectNoViolations(page, 'options, with the unanswered question');
+  await page.getByText('Not sure').click();
   await page.getByRole('button', { name: 'Next' }).click();
   await expectNoViolations(page, 'photos');
   await page.getByRole('button', { name: 'Next' }).click();

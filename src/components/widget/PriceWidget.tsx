@@ -3,7 +3,7 @@ import useSWR from 'swr';
 import type { Units } from '~/lib/estimate/index.ts';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
-import { newDraft, normaliseServerErrors, toProject, type Draft } from './draft';
+import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
 import { OptionsStep } from './OptionsStep';
 import { ResultView } from './ResultView';
 import { RoomsStep } from './RoomsStep';
@@ -79,7 +79,7 @@ export default function PriceWidget({ slug, formToken, firmName, units, treatmen
     shouldRetryOnError: false,
   });
   const serverErrors = live.error instanceof ApiError ? normaliseServerErrors(live.error.fields) : {};
-  const errors = { ...serverErrors, ...localErrors };
+  const errors = { ...serverErrors, ...localErrors, ...unansweredQuestions(draft) };
   const estimate = project && !live.error ? live.data : undefined;
   // Shown dimmed while the answers on screen are newer than the range.
   const updating = latestKey !== requestKey || live.isValidating;
@@ -95,7 +95,7 @@ export default function PriceWidget({ slug, formToken, firmName, units, treatmen
   const stepErrorKeys: Record<(typeof STEPS)[number]['id'], (path: string) => boolean> = {
     rooms: (p) => p.startsWith('project.rooms'),
     treatment: (p) => p === 'project.treatment' || p === 'project.wainscotHeight',
-    options: () => false,
+    options: (p) => p === 'project.builtBefore1978',
     photos: () => false,
     result: () => false,
     contact: () => false,
@@ -113,7 +113,7 @@ export default function PriceWidget({ slug, formToken, firmName, units, treatmen
   };
 
   const send = async (contact: ContactInput, website: string) => {
-    if (!project) return;
+    if (!project || Object.keys(unansweredQuestions(draft)).length) return;
     setSending(true);
     setSendError(null);
     try {
@@ -155,7 +155,12 @@ export default function PriceWidget({ slug, formToken, firmName, units, treatmen
           <TreatmentStep treatments={treatments} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
         )}
         {current.id === 'options' && (
-          <OptionsStep draft={draft} onChange={(patch) => setDraft({ ...draft, ...patch })} onRoomsChange={(rooms) => setDraft({ ...draft, rooms })} />
+          <OptionsStep
+            draft={draft}
+            errors={visibleErrors}
+            onChange={(patch) => setDraft({ ...draft, ...patch })}
+            onRoomsChange={(rooms) => setDraft({ ...draft, rooms })}
+          />
         )}
         {current.id === 'photos' && (
           <div className="space-y-3">
