@@ -53,7 +53,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await widget.getByRole('button', { name: 'Next' }).click();
   await expect(widget.getByRole('group', { name: /built before 1978/ })).toContainText('Choose yes, no or not sure');
   await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
-  await widget.getByText('Not sure').click();
+  await widget.getByText('Not sure', { exact: true }).click();
   await expect(widget.getByText('Choose yes, no or not sure')).toHaveCount(0);
   await widget.getByRole('button', { name: 'Next' }).click();
 

@@ -69,7 +69,7 @@ for (const brand of brands)
     await page.getByRole('button', { name: 'Next' }).click();
     await expect(page.getByText('Choose yes, no or not sure')).toBeVisible();
     await expectNoViolations(page, 'options, with the unanswered question');
-    await page.getByText('Not sure').click();
+    await page.getByText('Not sure', { exact: true }).click();
     await page.getByRole('button', { name: 'Next' }).click();
     await expectNoViolations(page, 'photos');
     await page.getByRole('button', { name: 'Next' }).click();
