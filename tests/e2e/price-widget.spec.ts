@@ -94,6 +94,9 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
 
   await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
   const reference = (await widget.locator('strong.figures').textContent())!.trim();
+  // The thank-you links to the estimate and gives the firm's phone (Cedar Hollow's demo number).
+  await expect(widget.getByRole('link', { name: /See your estimate/ })).toHaveAttribute('href', /\/estimate\/[0-9a-f-]{36}\?key=/);
+  await expect(widget.getByRole('link', { name: '+1 512 555 0147' })).toHaveAttribute('href', 'tel:+15125550147');
 
   // The lead is stored with its estimate snapshot, the rate-book version and both photos.
   const [lead] = await query<{ id: string; phone: string; range_low_cents: number; photos: string; version: number }>(
@@ -131,6 +134,10 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   const confirmation = await waitForMail({ to: email, subject: 'Your price estimate', timeoutMs: 15_000 });
   expect(confirmation.text).toContain(range);
   expect(confirmation.text).toContain(reference);
+  // In the firm's name, replies to the firm, and the link to the estimate in the first lines.
+  expect(confirmation.from.name).toBe('Cedar Hollow Trim Co.');
+  expect(confirmation.replyTo).toBe('hello@cedar-hollow.test');
+  expect(confirmation.text.split('\n').slice(0, 6).join('\n')).toMatch(/\/estimate\/[0-9a-f-]{36}\?key=/);
   const alert = await waitForMail({ to: 'olive@cedar-hollow.test', subject: reference, timeoutMs: 15_000 });
   expect(alert.text).toContain(range);
   expect(alert.text).toContain(`/app/leads/${lead!.id}`);

@@ -20,6 +20,8 @@ export type PriceWidgetProps = {
   slug: string;
   formToken: string;
   firmName: string;
+  /** Shown on the thank-you screen; null when the firm has none on file. */
+  firmPhone?: string | null;
   units: Units;
   treatments: OfferedTreatment[];
   /** The page that embeds us, already checked against the firm's allowed sites; null when opened directly. */
@@ -56,7 +58,7 @@ function useReportHeight(hostOrigin: string | null) {
   }, [hostOrigin]);
 }
 
-export default function PriceWidget({ slug, formToken, firmName, units, treatments, hostOrigin }: PriceWidgetProps) {
+export default function PriceWidget({ slug, formToken, firmName, firmPhone = null, units, treatments, hostOrigin }: PriceWidgetProps) {
   const [draft, setDraft] = useState<Draft>(() => ({ ...newDraft(units), treatmentId: treatments.length === 1 ? treatments[0]!.id : null }));
   const [step, setStep] = useState(0);
   const [photos, setPhotos] = useState<{ id: string; thumbnailUrl: string }[]>([]);
@@ -136,6 +138,23 @@ export default function PriceWidget({ slug, formToken, firmName, units, treatmen
           {` ${firmName}`} will be in touch to arrange a visit to measure.
         </p>
         {sent.estimate && <p className="figures text-xl font-bold">{sent.estimate.range.text}</p>}
+        {sent.lead.viewUrl && (
+          <p>
+            {/* The estimate opens in a new tab: the thank-you stays inside the firm's page. */}
+            <a href={sent.lead.viewUrl} target="_blank" rel="noopener" className="font-medium underline">
+              See your estimate, with drawings of each wall
+            </a>
+          </p>
+        )}
+        {firmPhone && (
+          <p>
+            Questions? Call {firmName} on{' '}
+            <a href={`tel:${firmPhone.replace(/\s/g, '')}`} className="figures font-medium underline">
+              {firmPhone}
+            </a>
+            .
+          </p>
+        )}
       </div>
     );
   }

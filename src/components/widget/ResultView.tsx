@@ -79,7 +79,7 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
       </section>
 
       {estimate.cautions.length > 0 && (
-        <section aria-labelledby="cautions-heading" className="rounded-lg border border-brick/40 bg-white p-4">
+        <section id="cautions" aria-labelledby="cautions-heading" className="rounded-lg border border-brick/40 bg-white p-4">
           <h3 id="cautions-heading" className="font-bold text-brick">
             Good to know before the work starts
           </h3>
