@@ -5,6 +5,21 @@
  * stands (default) or behind a floating button (data-mode="floating"). It loads nothing until the
  * widget is near the screen or the button is pressed, and never blocks the host page.
  */
+/**
+ * White or ink text on the button's colour, whichever contrasts more. The loader is one script with
+ * no imports, so this repeats `textOn` in src/lib/shared/contrast.ts.
+ * Source: W3C, WCAG 2.2, definitions "relative luminance" and "contrast ratio"; docs/sources.md §17.
+ */
+function textOnColour(hex: string): string {
+  const linear = (i: number) => {
+    const c = parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16) / 255;
+    return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+  };
+  const luminance = 0.2126 * linear(0) + 0.7152 * linear(1) + 0.0722 * linear(2);
+  const inkLuminance = 0.0214; // #1F2A2E by the same formula
+  return 1.05 / (luminance + 0.05) >= (luminance + 0.05) / (inkLuminance + 0.05) ? '#FFFFFF' : '#1F2A2E';
+}
+
 (() => {
   const script =
     (document.currentScript as HTMLScriptElement | null) ??
@@ -66,7 +81,7 @@
   button.type = 'button';
   button.textContent = label;
   button.setAttribute('aria-expanded', 'false');
-  button.style.cssText = `position:fixed;right:16px;bottom:16px;z-index:2147483000;padding:12px 18px;border:0;border-radius:999px;background:${colour};color:#fff;font:600 16px/1.2 system-ui,sans-serif;box-shadow:0 2px 10px rgba(0,0,0,.25);cursor:pointer;`;
+  button.style.cssText = `position:fixed;right:16px;bottom:16px;z-index:2147483000;padding:12px 18px;border:0;border-radius:999px;background:${colour};color:${textOnColour(colour)};font:600 16px/1.2 system-ui,sans-serif;box-shadow:0 2px 10px rgba(0,0,0,.25);cursor:pointer;`;
   let panel: HTMLDivElement | null = null;
   const close = () => {
     if (panel) panel.style.display = 'none';

@@ -2,7 +2,17 @@ import { readFile, readdir } from 'node:fs/promises';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 
-export type ReceivedMail = { file: string; to: string[]; subject: string; text: string; html: string; replyTo?: string; messageId?: string };
+export type ReceivedMail = {
+  file: string;
+  to: string[];
+  /** The From header's display name and address. */
+  from: { name: string; address: string };
+  subject: string;
+  text: string;
+  html: string;
+  replyTo?: string;
+  messageId?: string;
+};
 
 function mailDir(): string {
   const dir = process.env.DEV_MAIL_DIR;
@@ -20,6 +30,7 @@ async function readAll(): Promise<ReceivedMail[]> {
       return {
         file,
         to,
+        from: { name: parsed.from?.value[0]?.name ?? '', address: parsed.from?.value[0]?.address ?? '' },
         subject: parsed.subject ?? '',
         text: parsed.text ?? '',
         html: typeof parsed.html === 'string' ? parsed.html : '',

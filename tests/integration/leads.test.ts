@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import { getOrm } from '../../src/lib/server/boot/orm';
 import { Company } from '../../src/lib/server/companies/company.entity';
+import { config } from '../../src/lib/server/config';
 import { issueFormToken } from '../../src/lib/server/embed/form-token';
 import { InvalidInput } from '../../src/lib/server/errors';
 import { Lead } from '../../src/lib/server/leads/lead.entity';
@@ -99,9 +100,19 @@ describe('sending a lead', () => {
     // Back up, and the retry is due: delivered exactly once.
     await orm.em.fork().nativeUpdate(OutboxMail, { toAddress: request.contact.email }, { nextAttemptAt: new Date(Date.now() - 1000) });
     await deliverMatchingMail(orm.em.fork(), ownMail);
-    const mail = await waitForMail({ to: request.contact.email, subject: 'Your ballpark estimate' });
+    const mail = await waitForMail({ to: request.contact.email, subject: 'Your price estimate' });
     expect(mail.text).toContain(lead.reference);
     expect(await mailTo(request.contact.email)).toHaveLength(1);
+
+    // In the firm's name, from our own sending address, with replies going to the firm.
+    expect(mail.from.name).toBe(cedar.name);
+    expect(config.mailFrom).toContain(`<${mail.from.address}>`);
+    expect(cedar.contactEmail).toMatch(/@cedar-hollow\.test$/);
+    expect(mail.replyTo).toBe(cedar.contactEmail);
+    // The link to the estimate is in the first screen of text, before the rooms and cautions.
+    const firstLines = mail.text.split('\n').slice(0, 6).join('\n');
+    expect(firstLines).toMatch(new RegExp(`/estimate/${lead.id}\\?key=`));
+    expect(mail.text).toContain(cedar.phone!);
   });
 
   test('the same idempotency key sent twice at once makes one lead and one answer', async () => {

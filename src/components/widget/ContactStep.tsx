@@ -95,7 +95,11 @@ export function ContactStep({ firmName, sending, serverErrors, onSubmit }: Props
           </p>
         )}
       </div>
-      <button type="submit" className="w-full rounded-md bg-[var(--brand)] px-4 py-3 font-medium text-white disabled:opacity-60" disabled={sending}>
+      <button
+        type="submit"
+        className="w-full rounded-md bg-[var(--brand)] px-4 py-3 font-medium text-[var(--brand-text)] disabled:opacity-60"
+        disabled={sending}
+      >
         {sending ? 'Sending…' : `Send to ${firmName}`}
       </button>
     </form>

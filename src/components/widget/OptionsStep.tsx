@@ -1,6 +1,6 @@
-import type { Draft, RoomDraft } from './draft';
+import type { Draft, FieldErrors, RoomDraft } from './draft';
 
-type Props = { draft: Draft; onChange: (patch: Partial<Draft>) => void; onRoomsChange: (rooms: RoomDraft[]) => void };
+type Props = { draft: Draft; errors: FieldErrors; onChange: (patch: Partial<Draft>) => void; onRoomsChange: (rooms: RoomDraft[]) => void };
 
 function Choice<T extends string>({
   legend,
@@ -8,23 +8,37 @@ function Choice<T extends string>({
   value,
   options,
   onChange,
+  error,
+  required = false,
 }: {
   legend: string;
   name: string;
-  value: T;
+  /** Null while nothing is picked. */
+  value: T | null;
   options: [T, string][];
   onChange: (v: T) => void;
+  error?: string | undefined;
+  required?: boolean;
 }) {
+  const errorId = `${name}-error`;
   return (
-    <fieldset>
-      <legend className="field-label">{legend}</legend>
-      <div className="mt-1 flex flex-wrap gap-2">
+    <fieldset aria-describedby={error ? errorId : undefined} aria-invalid={error ? true : undefined}>
+      <legend className="field-label">
+        {legend}
+        {required && <span className="text-slate"> (required)</span>}
+      </legend>
+      {error && (
+        <p id={errorId} className="field-error">
+          {error}
+        </p>
+      )}
+      <div className={`mt-1 flex flex-wrap gap-2 ${error ? 'rounded-md outline outline-2 outline-offset-2 outline-brick' : ''}`}>
         {options.map(([option, label]) => (
           <label
             key={option}
             className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${value === option ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
           >
-            <input type="radio" className="sr-only" name={name} checked={value === option} onChange={() => onChange(option)} />
+            <input type="radio" className="sr-only" name={name} required={required} checked={value === option} onChange={() => onChange(option)} />
             {label}
           </label>
         ))}
@@ -33,7 +47,7 @@ function Choice<T extends string>({
   );
 }
 
-export function OptionsStep({ draft, onChange, onRoomsChange }: Props) {
+export function OptionsStep({ draft, errors, onChange, onRoomsChange }: Props) {
   const yesNo: ['yes' | 'no', string][] = [
     ['yes', 'Yes'],
     ['no', 'No'],
@@ -64,6 +78,8 @@ export function OptionsStep({ draft, onChange, onRoomsChange }: Props) {
           ['not-sure', 'Not sure'],
         ]}
         onChange={(builtBefore1978) => onChange({ builtBefore1978 })}
+        required
+        error={errors['project.builtBefore1978']}
       />
       <Choice
         legend="How did you get the sizes?"

@@ -275,7 +275,7 @@ export default function PhotoPicker({ slug, formToken, onChange, onBusyChange }:
           onClick={open}
           disabled={full}
           aria-describedby={hintId}
-          className="inline-flex min-h-11 items-center justify-center rounded-md bg-[var(--brand)] px-4 py-2 font-medium text-[var(--brand-text,#ffffff)] disabled:opacity-60"
+          className="inline-flex min-h-11 items-center justify-center rounded-md bg-[var(--brand)] px-4 py-2 font-medium text-[var(--brand-text)] disabled:opacity-60"
         >
           {items.length ? 'Add more photos' : 'Add photos'}
         </button>

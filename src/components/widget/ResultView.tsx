@@ -3,14 +3,14 @@ import { formatMoney } from '~/lib/estimate/money.ts';
 import { wallSummary } from '~/lib/estimate/summary.ts';
 import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
 
-/** The ballpark: the range, how it adds up, a drawing of every wall, and what to know. */
+/** The price range: the range, how it adds up, a drawing of every wall, and what to know. */
 export function ResultView({ estimate, firmName, updating }: { estimate: HomeownerEstimate; firmName: string; updating: boolean }) {
   const money = (cents: number) => formatMoney(cents, estimate.currency, estimate.locale, { wholeUnits: true });
   return (
     <div className="space-y-6">
       <section aria-labelledby="range-heading" className="rounded-lg border border-slate/30 bg-white p-5 text-center">
         <h3 id="range-heading" className="text-sm font-medium text-slate">
-          Your ballpark price range
+          The range
         </h3>
         <p className={`figures mt-1 text-3xl font-bold ${updating ? 'opacity-50' : ''}`} data-testid="result-range" aria-busy={updating}>
           {estimate.range.text}
@@ -79,7 +79,7 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
       </section>
 
       {estimate.cautions.length > 0 && (
-        <section aria-labelledby="cautions-heading" className="rounded-lg border border-brick/40 bg-white p-4">
+        <section id="cautions" aria-labelledby="cautions-heading" className="rounded-lg border border-brick/40 bg-white p-4">
           <h3 id="cautions-heading" className="font-bold text-brick">
             Good to know before the work starts
           </h3>
@@ -92,7 +92,7 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
           </ul>
         </section>
       )}
-      <p className="text-sm text-slate">This is a ballpark from your answers. {firmName} gives a firm price after measuring on site.</p>
+      <p className="text-sm text-slate">This is a rough range from your answers. {firmName} gives a firm price after measuring on site.</p>
     </div>
   );
 }

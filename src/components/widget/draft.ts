@@ -31,7 +31,8 @@ export type Draft = {
   wainscotHeight: string;
   replaceBaseboard: boolean;
   paint: boolean;
-  builtBefore1978: 'yes' | 'no' | 'not-sure';
+  /** Null until the homeowner answers: a guessed "no" would hide the lead-paint caution. */
+  builtBefore1978: 'yes' | 'no' | 'not-sure' | null;
   measuredBy: 'homeowner-estimate' | 'homeowner-tape';
 };
 
@@ -65,7 +66,7 @@ export function newDraft(units: Units): Draft {
     wainscotHeight: units === 'imperial' ? '36"' : '900 mm',
     replaceBaseboard: false,
     paint: true,
-    builtBefore1978: 'no',
+    builtBefore1978: null,
     measuredBy: 'homeowner-estimate',
   };
 }
@@ -137,10 +138,19 @@ export function toProject(draft: Draft, units: Units): { project: ProjectInput |
     };
   });
   if (Object.keys(errors).length) return { project: null, errors };
+  // Until the question is answered the live range is priced as "not sure" (lead-safe work
+  // included), the cautious reading; sending still waits for an answer (`unansweredQuestions`).
   return {
-    project: { rooms, paint: draft.paint, builtBefore1978: draft.builtBefore1978, measuredBy: draft.measuredBy, photoCount: 0 },
+    project: { rooms, paint: draft.paint, builtBefore1978: draft.builtBefore1978 ?? 'not-sure', measuredBy: draft.measuredBy, photoCount: 0 },
     errors,
   };
+}
+
+export const BUILT_BEFORE_1978_REQUIRED = 'Choose yes, no or not sure: homes built before 1978 may have lead paint, which changes how the work is done.';
+
+/** Questions the homeowner must answer before going on; they do not stop the live range. */
+export function unansweredQuestions(draft: Draft): FieldErrors {
+  return draft.builtBefore1978 === null ? { 'project.builtBefore1978': BUILT_BEFORE_1978_REQUIRED } : {};
 }
 
 /** Server paths for the treatment's wainscot height live on every room; show them once. */

@@ -39,6 +39,10 @@ export class Company extends BaseEntity {
   @Property({ type: 'string', length: 20, nullable: true })
   phone: string | null = null;
 
+  /** Where a homeowner's reply reaches the firm (the Reply-To of mail sent in the firm's name). */
+  @Property({ type: 'string', length: 254, nullable: true })
+  contactEmail: string | null = null;
+
   /** The firm's own website, shown in e-mails. */
   @Property({ type: 'string', length: 200, nullable: true })
   website: string | null = null;

@@ -19,6 +19,8 @@ type DemoFirm = {
   timeZone: string;
   brandColor: string;
   phone: string;
+  /** Where homeowners' replies go. */
+  contactEmail: string;
   servicePostcodes: string[];
   notificationEmails: string[];
   people: { email: string; name: string; role: Role }[];
@@ -33,6 +35,7 @@ export const DEMO_FIRMS: DemoFirm[] = [
     timeZone: 'America/Chicago',
     brandColor: '#7A4E2D',
     phone: '+1 512 555 0147',
+    contactEmail: 'hello@cedar-hollow.test',
     servicePostcodes: ['786', '787'],
     notificationEmails: ['olive@cedar-hollow.test', 'sam@cedar-hollow.test'],
     rates: (base) => base,
@@ -48,6 +51,7 @@ export const DEMO_FIRMS: DemoFirm[] = [
     timeZone: 'America/New_York',
     brandColor: '#1D4E89',
     phone: '+1 617 555 0123',
+    contactEmail: 'office@northgate.test',
     servicePostcodes: ['021', '022'],
     notificationEmails: ['nora@northgate.test'],
     rates: (base) => ({
@@ -73,10 +77,14 @@ export async function seedDemo(em: EntityManager): Promise<string> {
         timeZone: firm.timeZone,
         brandColor: firm.brandColor,
         phone: firm.phone,
+        contactEmail: firm.contactEmail,
         servicePostcodes: firm.servicePostcodes,
         notificationEmails: firm.notificationEmails,
       });
       created++;
+    } else if (!company.contactEmail) {
+      // Databases seeded before firms had a contact address get one.
+      company.contactEmail = firm.contactEmail;
     }
     for (const person of firm.people) {
       let user = await em.findOne(User, { email: person.email });

@@ -15,7 +15,7 @@ import { enqueueMail } from '../mail/outbox';
 import { kickMailDelivery } from '../mail/delivery-job';
 import { Lead } from './lead.entity';
 import { leadInputs } from './lead-inputs';
-import { homeownerConfirmation, newLeadAlert } from './lead-mail';
+import { firmReplyTo, homeownerConfirmation, newLeadAlert } from './lead-mail';
 import { newLeadReference } from './lead-reference';
 
 const digest = (text: string) => createHash('sha256').update(text).digest('hex');
@@ -115,7 +115,7 @@ export async function createLead(
 
       const facts = { ...input.contact, reference: lead.reference, message: lead.message };
       const confirmation = homeownerConfirmation(company, facts, view, leadViewUrl(lead.id, viewToken));
-      enqueueMail(tx, { to: lead.email, ...confirmation, companyId: company.id, replyTo: company.notificationEmails[0] });
+      enqueueMail(tx, { to: lead.email, ...confirmation, companyId: company.id, fromName: company.name, replyTo: firmReplyTo(company) });
       const alert = newLeadAlert(company, facts, view, staffLeadUrl(lead.id), input.photoCount ?? 0);
       for (const to of company.notificationEmails) enqueueMail(tx, { to, ...alert, companyId: company.id, replyTo: lead.email });
       await tx.flush();

@@ -31,6 +31,10 @@ export class OutboxMail extends BaseEntity {
   @Property({ type: 'text', nullable: true })
   htmlBody: string | null = null;
 
+  /** The From display name (a firm's name); the sending address stays ours. Null: the configured sender as is. */
+  @Property({ type: 'string', length: 120, nullable: true })
+  fromName: string | null = null;
+
   /** Optional Reply-To, so a homeowner's answer reaches the firm rather than the no-reply sender. */
   @Property({ type: 'string', length: 254, nullable: true })
   replyTo: string | null = null;

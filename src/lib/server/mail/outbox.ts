@@ -12,6 +12,8 @@ export type MailMessage = {
   text: string;
   html?: string;
   replyTo?: string;
+  /** Sent in this name (the firm's), from our own address. */
+  fromName?: string;
   companyId?: string;
 };
 
@@ -36,6 +38,7 @@ export function enqueueMail(em: EntityManager, message: MailMessage): OutboxMail
     textBody: message.text,
     htmlBody: message.html ?? null,
     replyTo: message.replyTo ?? null,
+    fromName: message.fromName ?? null,
   });
 }
 
@@ -91,6 +94,7 @@ export async function deliverDueMail(
         text: claim.textBody,
         html: claim.htmlBody ?? undefined,
         replyTo: claim.replyTo ?? undefined,
+        fromName: claim.fromName ?? undefined,
         messageId: claim.messageId!,
       };
       const outcome = await withTimeout(

@@ -7,10 +7,23 @@ export type OutgoingMail = {
   text: string;
   html?: string;
   replyTo?: string;
+  /** Display name to send under, with the configured sender's address (mail in a firm's name). */
+  fromName?: string;
   /** The Message-ID header to send (kept by the outbox across attempts); nodemailer makes one otherwise. */
   messageId?: string;
 };
 export type SendMail = (message: OutgoingMail) => Promise<void>;
+
+/**
+ * The From header: the configured sender, or its address under another display name. Only the name
+ * changes: mail from our own address keeps passing the receivers' sender checks (SPF, DKIM, DMARC),
+ * which a firm's own domain in From would fail.
+ */
+export function senderFor(mailFrom: string, fromName: string | undefined): string | { name: string; address: string } {
+  if (!fromName) return mailFrom;
+  const address = /<([^<>]+)>\s*$/.exec(mailFrom)?.[1] ?? mailFrom.trim();
+  return { name: fromName, address };
+}
 
 /** A sender for one SMTP server (smtp:// or smtps:// URL). */
 export function createSmtpSender(smtpUrl: string): SendMail {
@@ -27,8 +40,8 @@ export function createSmtpSender(smtpUrl: string): SendMail {
     // The local stand-in offers no TLS; a real provider is reached with smtps:// or STARTTLS.
     ignoreTLS: url.protocol === 'smtp:' && url.hostname === '127.0.0.1',
   });
-  return async (message) => {
-    await transporter.sendMail({ from: config.mailFrom, ...message });
+  return async ({ fromName, ...message }) => {
+    await transporter.sendMail({ from: senderFor(config.mailFrom, fromName), ...message });
   };
 }
 

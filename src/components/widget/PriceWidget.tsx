@@ -3,7 +3,7 @@ import useSWR from 'swr';
 import type { Units } from '~/lib/estimate/index.ts';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
-import { newDraft, normaliseServerErrors, toProject, type Draft } from './draft';
+import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
 import { OptionsStep } from './OptionsStep';
 import { ResultView } from './ResultView';
 import { RoomsStep } from './RoomsStep';
@@ -16,10 +16,12 @@ const loadPhotoPicker = () => import('./PhotoPicker');
 const ContactStep = lazy(() => loadContactStep().then((module) => ({ default: module.ContactStep })));
 const PhotoPicker = lazy(loadPhotoPicker);
 
-export type BallparkWidgetProps = {
+export type PriceWidgetProps = {
   slug: string;
   formToken: string;
   firmName: string;
+  /** Shown on the thank-you screen; null when the firm has none on file. */
+  firmPhone?: string | null;
   units: Units;
   treatments: OfferedTreatment[];
   /** The page that embeds us, already checked against the firm's allowed sites; null when opened directly. */
@@ -31,7 +33,7 @@ const STEPS = [
   { id: 'treatment', title: 'Treatment and height' },
   { id: 'options', title: 'A few details' },
   { id: 'photos', title: 'Photos' },
-  { id: 'result', title: 'Your ballpark' },
+  { id: 'result', title: 'Your price range' },
   { id: 'contact', title: 'Your details' },
 ] as const;
 
@@ -56,7 +58,7 @@ function useReportHeight(hostOrigin: string | null) {
   }, [hostOrigin]);
 }
 
-export default function BallparkWidget({ slug, formToken, firmName, units, treatments, hostOrigin }: BallparkWidgetProps) {
+export default function PriceWidget({ slug, formToken, firmName, firmPhone = null, units, treatments, hostOrigin }: PriceWidgetProps) {
   const [draft, setDraft] = useState<Draft>(() => ({ ...newDraft(units), treatmentId: treatments.length === 1 ? treatments[0]!.id : null }));
   const [step, setStep] = useState(0);
   const [photos, setPhotos] = useState<{ id: string; thumbnailUrl: string }[]>([]);
@@ -79,7 +81,7 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
     shouldRetryOnError: false,
   });
   const serverErrors = live.error instanceof ApiError ? normaliseServerErrors(live.error.fields) : {};
-  const errors = { ...serverErrors, ...localErrors };
+  const errors = { ...serverErrors, ...localErrors, ...unansweredQuestions(draft) };
   const estimate = project && !live.error ? live.data : undefined;
   // Shown dimmed while the answers on screen are newer than the range.
   const updating = latestKey !== requestKey || live.isValidating;
@@ -95,7 +97,7 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
   const stepErrorKeys: Record<(typeof STEPS)[number]['id'], (path: string) => boolean> = {
     rooms: (p) => p.startsWith('project.rooms'),
     treatment: (p) => p === 'project.treatment' || p === 'project.wainscotHeight',
-    options: () => false,
+    options: (p) => p === 'project.builtBefore1978',
     photos: () => false,
     result: () => false,
     contact: () => false,
@@ -113,7 +115,7 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
   };
 
   const send = async (contact: ContactInput, website: string) => {
-    if (!project) return;
+    if (!project || Object.keys(unansweredQuestions(draft)).length) return;
     setSending(true);
     setSendError(null);
     try {
@@ -132,10 +134,27 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
           Thank you — it's on its way to {firmName}
         </h2>
         <p>
-          Your reference is <strong className="figures">{sent.lead.reference}</strong>. We've sent a copy of your ballpark to your e-mail.
+          Your reference is <strong className="figures">{sent.lead.reference}</strong>. We've sent a copy of your price range to your e-mail.
           {` ${firmName}`} will be in touch to arrange a visit to measure.
         </p>
         {sent.estimate && <p className="figures text-xl font-bold">{sent.estimate.range.text}</p>}
+        {sent.lead.viewUrl && (
+          <p>
+            {/* The estimate opens in a new tab: the thank-you stays inside the firm's page. */}
+            <a href={sent.lead.viewUrl} target="_blank" rel="noopener" className="font-medium underline">
+              See your estimate, with drawings of each wall
+            </a>
+          </p>
+        )}
+        {firmPhone && (
+          <p>
+            Questions? Call {firmName} on{' '}
+            <a href={`tel:${firmPhone.replace(/\s/g, '')}`} className="figures font-medium underline">
+              {firmPhone}
+            </a>
+            .
+          </p>
+        )}
       </div>
     );
   }
@@ -155,7 +174,12 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
           <TreatmentStep treatments={treatments} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
         )}
         {current.id === 'options' && (
-          <OptionsStep draft={draft} onChange={(patch) => setDraft({ ...draft, ...patch })} onRoomsChange={(rooms) => setDraft({ ...draft, rooms })} />
+          <OptionsStep
+            draft={draft}
+            errors={visibleErrors}
+            onChange={(patch) => setDraft({ ...draft, ...patch })}
+            onRoomsChange={(rooms) => setDraft({ ...draft, rooms })}
+          />
         )}
         {current.id === 'photos' && (
           <div className="space-y-3">
@@ -217,7 +241,7 @@ export default function BallparkWidget({ slug, formToken, firmName, units, treat
         <div className="fixed inset-x-0 bottom-0 border-t border-slate/30 bg-paper/95 px-4 py-3 text-center" aria-live="polite" data-testid="live-range">
           {estimate ? (
             <>
-              <span className="text-sm text-slate">Ballpark so far: </span>
+              <span className="text-sm text-slate">Price range so far: </span>
               <span className="figures text-lg font-bold">{estimate.range.text}</span>
             </>
           ) : (

@@ -47,7 +47,14 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await widget.getByRole('button', { name: 'Next' }).click();
 
   await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
-  await widget.getByText('Not sure').click();
+  // "Built before 1978" starts unanswered: going on without it is refused beside the question.
+  await expect(widget.getByRole('radio', { name: 'Not sure' })).not.toBeChecked();
+  await expect(widget.getByRole('radio', { name: 'No', exact: true }).nth(2)).not.toBeChecked();
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await expect(widget.getByRole('group', { name: /built before 1978/ })).toContainText('Choose yes, no or not sure');
+  await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
+  await widget.getByText('Not sure', { exact: true }).click();
+  await expect(widget.getByText('Choose yes, no or not sure')).toHaveCount(0);
   await widget.getByRole('button', { name: 'Next' }).click();
 
   await expect(widget.getByRole('heading', { name: 'Photos', exact: true })).toBeVisible();
@@ -59,7 +66,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await expect(photoList.getByText('Added.', { exact: true })).toHaveCount(2, { timeout: 30_000 });
   await widget.getByRole('button', { name: 'Next' }).click();
 
-  await expect(widget.getByRole('heading', { name: 'Your ballpark', exact: true })).toBeVisible();
+  await expect(widget.getByRole('heading', { name: 'Your price range', exact: true })).toBeVisible();
   await expect(widget.getByTestId('result-range')).toHaveAttribute('aria-busy', 'false');
   const range = (await widget.getByTestId('result-range').textContent())!.trim();
   expect(range).toMatch(/^\$[\d,]+ – \$[\d,]+$/);
@@ -87,6 +94,9 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
 
   await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
   const reference = (await widget.locator('strong.figures').textContent())!.trim();
+  // The thank-you links to the estimate and gives the firm's phone (Cedar Hollow's demo number).
+  await expect(widget.getByRole('link', { name: /See your estimate/ })).toHaveAttribute('href', /\/estimate\/[0-9a-f-]{36}\?key=/);
+  await expect(widget.getByRole('link', { name: '+1 512 555 0147' })).toHaveAttribute('href', 'tel:+15125550147');
 
   // The lead is stored with its estimate snapshot, the rate-book version and both photos.
   const [lead] = await query<{ id: string; phone: string; range_low_cents: number; photos: string; version: number }>(
@@ -121,9 +131,13 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   expect(photoRows.some((row) => row.height > row.width)).toBe(true);
 
   // Both e-mails arrive with the same range the homeowner saw.
-  const confirmation = await waitForMail({ to: email, subject: 'Your ballpark estimate', timeoutMs: 15_000 });
+  const confirmation = await waitForMail({ to: email, subject: 'Your price estimate', timeoutMs: 15_000 });
   expect(confirmation.text).toContain(range);
   expect(confirmation.text).toContain(reference);
+  // In the firm's name, replies to the firm, and the link to the estimate in the first lines.
+  expect(confirmation.from.name).toBe('Cedar Hollow Trim Co.');
+  expect(confirmation.replyTo).toBe('hello@cedar-hollow.test');
+  expect(confirmation.text.split('\n').slice(0, 6).join('\n')).toMatch(/\/estimate\/[0-9a-f-]{36}\?key=/);
   const alert = await waitForMail({ to: 'olive@cedar-hollow.test', subject: reference, timeoutMs: 15_000 });
   expect(alert.text).toContain(range);
   expect(alert.text).toContain(`/app/leads/${lead!.id}`);
