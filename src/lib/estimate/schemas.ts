@@ -62,6 +62,8 @@ export const openingSchema = z.strictObject({
   sillHeight: inches('Sill height', 0, 120).optional(),
   /** Distance from the wall's left end to the opening's left edge; set from the left end when left out. */
   offset: inches('Distance from the left end', 0, 1200).optional(),
+  /** Width of the casing around this opening, when it differs from the rate book's (0 = no casing). */
+  casingWidth: inches('Casing width', 0, 12).optional(),
 });
 
 export const wallSchema = z.strictObject({
@@ -331,6 +333,12 @@ export const catalogueSchema = z.strictObject({
   mouldings: z.array(mouldingStockSchema).max(50),
   baseboardId: stockId('Baseboard'),
   capRailId: stockId('Cap rail'),
+  /**
+   * The casing usually found around doors and windows: its width stops the treatment short of the
+   * opening, its thickness is the face the new work must stay behind. Default 2-1/4 × 11/16 in:
+   * from memory, docs/sources.md §30.
+   */
+  casing: z.strictObject({ width: inches('Casing width', 0, 12), thickness: inches('Casing thickness', 0, 2) }).default({ width: 2.25, thickness: 0.6875 }),
   supplies: suppliesSchema,
   treatments: z.array(treatmentSchema).min(1, { error: 'The catalogue needs at least one treatment.' }).max(50),
 });

@@ -3,6 +3,7 @@
  * pieces of material on the wall and the cuts they need; then the project's materials and cautions.
  */
 import { boardPositions, boardRun } from './board-run.ts';
+import { blockedAreaSqIn, casingBlock } from './casings.ts';
 import { cautionsFor } from './cautions.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
@@ -323,23 +324,23 @@ function wallTakeoff(
   const bandBottom = baseboard.width;
   const bandTop = bandTopFor(room);
   const wainscot = room.treatment.height === 'wainscot';
-  const openings: PlacedOpening[] = placeOpenings(wall.openings, length).map((o) => ({
-    ...o,
-    inBand: overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop) > 0,
-  }));
+  const openings: PlacedOpening[] = placeOpenings(wall.openings, length, catalogue.casing.width).map((o) => {
+    const block = casingBlock({ ...o, inBand: false }, length);
+    return { ...o, inBand: overlap(block.sillHeight, block.sillHeight + block.height, bandBottom, bandTop) > 0 };
+  });
+  // Layouts, areas, boxes, caulk and returns see each opening with its casing: the treatment stops at
+  // the casing's outside edge, and an upright set beside an opening lands against the casing.
+  const blocks = openings.map((o) => casingBlock(o, length));
   const covers = coversWall(t);
-  const boxes = placeBoxes(wall, length, openings).map((b) => ({
+  const boxes = placeBoxes(wall, length, blocks).map((b) => ({
     ...b,
     covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, bandTop) > 0,
     capRailCrosses: wainscot && overlap(b.bottom, b.bottom + b.height, bandTop, bandTop + capRail.width) > 0,
   }));
   const coveredHeight = bandTop - bandBottom;
   const grossSqIn = length * coveredHeight;
-  const openingsSqIn = openings.reduce(
-    (s, o) => s + overlap(o.offset, o.offset + o.width, 0, length) * overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop),
-    0,
-  );
-  const ctx: WallContext = { length, bandBottom, bandTop, openings, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
+  const openingsSqIn = blockedAreaSqIn(blocks, length, bandBottom, bandTop);
+  const ctx: WallContext = { length, bandBottom, bandTop, openings: blocks, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
   const notes: string[] = [];
   const label = wall.label ?? `Wall ${index + 1}`;
   let boards: BoardLayout | undefined;
@@ -397,7 +398,7 @@ function wallTakeoff(
   }
   if (room.replaceBaseboard) ctx.caulkFeet += baseboardFeet;
   // The edges of openings inside the band (the wall ends are counted per room, by its corners).
-  for (const o of openings) {
+  for (const o of blocks) {
     if (!o.inBand) continue;
     const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop);
     const across = (o.sillHeight > bandBottom ? o.width : 0) + (o.sillHeight + o.height < bandTop ? o.width : 0);
@@ -436,7 +437,7 @@ function wallTakeoff(
     cutOuts: covered,
     // A return wherever the treatment stops at an opening: in the covered band, or where the cap rail
     // runs into the opening and is returned at its edge (common practice, no source).
-    returns: openings.filter((o) => o.inBand || (wainscot && overlap(o.sillHeight, o.sillHeight + o.height, bandTop, bandTop + capRail.width) > 0)).length,
+    returns: blocks.filter((o) => o.inBand || (wainscot && overlap(o.sillHeight, o.sillHeight + o.height, bandTop, bandTop + capRail.width) > 0)).length,
     ...(boards ? { boards } : {}),
     ...(frames ? { frames } : {}),
     pieces: ctx.pieces,
@@ -518,7 +519,7 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
     // The same defaults the openings were placed with (geometry.ts), so the note tells what was drawn.
     const len = (x: number): string => formatLength(x, units);
     notes.push(
-      `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart.`,
+      `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart, or further where their casings need the room.`,
     );
   }
   for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));

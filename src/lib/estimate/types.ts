@@ -16,6 +16,8 @@ export interface PlacedOpening {
   inBand: boolean;
   /** True when size or place were filled in with defaults rather than measured. */
   assumed: boolean;
+  /** Width of the casing around it (sides and head); the treatment stops at its outside edge. */
+  casingWidth?: number;
 }
 
 export interface PlacedBox {

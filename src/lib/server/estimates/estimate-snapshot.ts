@@ -19,6 +19,7 @@ const placedOpening = z.object({
   sillHeight: num,
   inBand: z.boolean(),
   assumed: z.boolean(),
+  casingWidth: num.optional(),
 });
 
 const placedBox = z.object({
