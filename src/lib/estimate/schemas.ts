@@ -333,6 +333,8 @@ export const catalogueSchema = z.strictObject({
   mouldings: z.array(mouldingStockSchema).max(50),
   baseboardId: stockId('Baseboard'),
   capRailId: stockId('Cap rail'),
+  /** A moulding run around a casing's outside edge where the new work stands proud of it (docs/sources.md §31). */
+  backBandId: stockId('Back band').optional(),
   /**
    * The casing usually found around doors and windows: its width stops the treatment short of the
    * opening, its thickness is the face the new work must stay behind. Default 2-1/4 × 11/16 in:
@@ -362,6 +364,7 @@ export const rateBookSchema = z
       hoursPerFootBaseboardRemoved: num('Time per foot of baseboard removed', 'hours', 0, 2),
       hoursPerFootBaseboardInstalled: num('Time per foot of baseboard installed', 'hours', 0, 2),
       hoursPerFootCapRail: num('Time per foot of cap rail', 'hours', 0, 2),
+      hoursPerFootBackBand: num('Time per foot of back band', 'hours', 0, 2).default(0),
       paintSqFtPerHour: num('Painting productivity', 'sq ft per hour', 1, 1000),
       /** Older rate books charged set-up per room; kept so they still parse, and used when the per-visit figure is missing. */
       setupHoursPerRoom: num('Set-up and clean-up per room', 'hours', 0, 24).optional(),
@@ -439,6 +442,7 @@ export const rateBookSchema = z
     );
     need(mouldings, c.baseboardId, ['catalogue', 'baseboardId'], 'moulding');
     need(mouldings, c.capRailId, ['catalogue', 'capRailId'], 'moulding');
+    need(mouldings, c.backBandId, ['catalogue', 'backBandId'], 'moulding');
     c.treatments.forEach((t, i) => {
       const p = (k: string): PropertyKey[] => ['catalogue', 'treatments', i, k];
       switch (t.kind) {

@@ -3,6 +3,7 @@
  * pieces of material on the wall and the cuts they need; then the project's materials and cautions.
  */
 import { boardPositions, boardRun } from './board-run.ts';
+import { backBandRuns, CASING_REVEAL, newFaceThickness, proudOfCasing } from './build-up.ts';
 import { blockedAreaSqIn, casingBlock } from './casings.ts';
 import { cautionsFor } from './cautions.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
@@ -309,6 +310,36 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
   return { count, width: count ? widthSum / count : 0, height: count ? fh : 0 };
 }
 
+/**
+ * Where the new face stands proud of the casings on a wall's openings in the band: a back band around
+ * each (cut and counted as trim) when the rate book names one, otherwise a note. Returns its feet.
+ */
+function backBandAtCasings(ctx: WallContext, openings: PlacedOpening[], t: Treatment, label: string, units: Units, notes: string[]): number {
+  const cased = openings.filter((o) => o.inBand && (o.casingWidth ?? 0) > 0);
+  const face = newFaceThickness(t, ctx.catalogue);
+  const casing = ctx.catalogue.casing.thickness;
+  if (cased.length === 0 || proudOfCasing(face, casing) <= 0) return 0;
+  const why = `the new face (${formatLength(face, units)} thick) stands proud of the ${formatLength(casing, units)} casings, which it should stay ${formatLength(CASING_REVEAL, units)} behind`;
+  const band = ctx.catalogue.mouldings.find((m) => m.id === ctx.catalogue.backBandId);
+  if (!band) {
+    notes.push(`On ${label}, ${why}: the casings stand behind the new face and need a back band or furring, not priced here.`);
+    return 0;
+  }
+  let inches = 0;
+  for (const o of cased) {
+    for (const run of backBandRuns(o)) {
+      addCuts(ctx.reg.lengths, band.id, trimCuts(run, band.length, ctx.catalogue.trimEndAllowance));
+      inches += run;
+    }
+  }
+  const feet = inches / 12;
+  ctx.trimFeet += feet;
+  notes.push(
+    `On ${label}, ${why}, so a back band (${band.name}) goes around ${cased.length === 1 ? 'the casing' : `${cased.length} casings`}: ${Math.round(feet * 10) / 10} ft.`,
+  );
+  return feet;
+}
+
 function wallTakeoff(
   room: Room,
   wall: Wall,
@@ -317,7 +348,7 @@ function wallTakeoff(
   catalogue: Catalogue,
   reg: CutRegistry,
   units: Units,
-): { wall: WallTakeoff; trimFeet: number; caulkFeet: number } {
+): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number } {
   const length = wallLength(room, wall);
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
@@ -420,6 +451,7 @@ function wallTakeoff(
       `Some frame sides on ${label} are longer than the longest moulding (${formatLength(longest, units)}), so they are joined: ${ctx.joints === 1 ? 'one scarf joint' : `${ctx.joints} scarf joints`}.`,
     );
   }
+  const backBandFeet = backBandAtCasings(ctx, openings, t, label, units, notes);
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;
   const out: WallTakeoff = {
@@ -445,7 +477,7 @@ function wallTakeoff(
     baseboardFeet,
     notes,
   };
-  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet };
+  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet };
 }
 
 function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
@@ -454,10 +486,12 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
   let trimFeet = 0;
   let caulkFeet = 0;
+  let backBandFeet = 0;
   const walls = room.walls.map((w, i) => {
     const wt = wallTakeoff(room, w, i, t, catalogue, reg, units);
     trimFeet += wt.trimFeet;
     caulkFeet += wt.caulkFeet;
+    backBandFeet += wt.backBandFeet;
     return wt.wall;
   });
   const sum = (f: (w: WallTakeoff) => number): number => walls.reduce((s, w) => s + f(w), 0);
@@ -496,6 +530,7 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     capRailFeet,
     baseboardFeet,
     baseboardRemovedFeet,
+    ...(backBandFeet > 0 ? { backBandFeet } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
     // The old baseboard is taken to be as tall as the new one.
     disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,

@@ -96,6 +96,8 @@ export interface RoomTakeoff {
   capRailFeet: number;
   baseboardFeet: number;
   baseboardRemovedFeet: number;
+  /** Back band added around casings the new work stands proud of (docs/sources.md §31). */
+  backBandFeet?: number;
   /** Painted surface disturbed by the work (removed baseboard counts in full), for the lead-safe rule. */
   disturbedPaintSqFt: number;
   /** Area of boards or sheets glued and nailed to the wall (drives adhesive, brads and filler). */
@@ -154,7 +156,7 @@ export interface Takeoff {
 }
 
 export interface LabourLine {
-  task: 'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'paint' | 'setup';
+  task: 'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'back-band' | 'paint' | 'setup';
   label: string;
   hours: number;
   basis: string;

@@ -91,6 +91,7 @@ const roomTakeoff = z.object({
   capRailFeet: num,
   baseboardFeet: num,
   baseboardRemovedFeet: num,
+  backBandFeet: num.optional(),
   disturbedPaintSqFt: num,
   panelSqFt: num,
   trimFeet: num,
@@ -139,7 +140,7 @@ const takeoff = z.object({
 });
 
 const labourLine = z.object({
-  task: z.enum(['install', 'cut-outs', 'returns', 'corners', 'baseboard-removal', 'baseboard', 'cap-rail', 'paint', 'setup']),
+  task: z.enum(['install', 'cut-outs', 'returns', 'corners', 'baseboard-removal', 'baseboard', 'cap-rail', 'back-band', 'paint', 'setup']),
   label: str,
   hours: num,
   basis: str,
