@@ -108,6 +108,46 @@ describe('a 14 ft full-height board-and-batten accent wall with a 36 × 80 in do
   });
 });
 
+describe('a 12 ft flat-panel wainscot wall with a 36 × 80 in door at 54 in, in 2-1/4 in casing', () => {
+  // Casing 2-1/4 in (from memory, docs/sources.md §30): the door blocks 54 − 2.25 = 51.75 to 54 + 36 + 2.25 = 92.25 in.
+  const project: ProjectInput = {
+    rooms: [
+      {
+        name: 'Dining room',
+        ceilingHeight: 96,
+        walls: [{ length: 144, openings: [{ kind: 'door', width: 36, height: 80, sillHeight: 0, offset: 54 }] }],
+        treatment: { id: 'flat-panel', height: 'wainscot', wainscotHeight: 36 },
+      },
+    ],
+    paint: false,
+    builtBefore1978: 'no',
+    measuredBy: 'site-measure',
+    photoCount: 0,
+  };
+  const t = takeoff(project, book().catalogue);
+  const pieces = t.rooms[0]!.walls[0]!.pieces;
+
+  it('stops rails, cap rail and baseboard at the casing and sets a stile against it', () => {
+    // Rails, cap rail and baseboard: 0–51.75 and 92.25–144 in (common practice, no source: they butt the casing).
+    for (const role of ['rail', 'cap-rail', 'baseboard'] as const) {
+      const runs = pieces.filter((p) => p.role === role).map((p) => [p.x, p.x + p.width]);
+      expect(runs.length).toBeGreaterThan(0);
+      for (const [a, b] of runs) expect(b! <= 51.75 + 1e-9 || a! >= 92.25 - 1e-9).toBe(true);
+    }
+    // Stiles: 1x4, 3-1/2 in (DOC PS 20, docs/sources.md §1), at most 24 in on centre: n = ceil((144 − 3.5) ÷ 24) + 1 = 7,
+    //   pitch 140.5 ÷ 6 = 23.417 in; the 4th (70.25 in) lands on the door, 22 in from either side, and goes to the
+    //   left one: 51.75 − 3.5 = 48.25 in, its edge on the casing's.
+    const stiles = pieces.filter((p) => p.role === 'stile').map((p) => p.x);
+    expect(stiles.some((x) => Math.abs(x - 48.25) < 1e-9)).toBe(true);
+    expect(stiles.every((x) => x + 3.5 <= 51.75 + 1e-9 || x >= 92.25 - 1e-9)).toBe(true);
+  });
+
+  it('adds the back band: 1/4 in backing + 3/4 in stile = 1 in, more than 11/16 − 1/8 = 9/16 in', () => {
+    // Two sides of 82.25 in and a 40.5 in head = 205 in (docs/sources.md §31).
+    expect(t.rooms[0]!.backBandFeet).toBeCloseTo(205 / 12, 9);
+  });
+});
+
 describe('placing counted openings with their casings', () => {
   it('keeps casings off each other and off the wall ends', () => {
     // Two counted 24 in windows with 2-1/4 in casings: the first 3 in from the end (≥ 2.25), the next
