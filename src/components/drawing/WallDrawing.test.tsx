@@ -33,6 +33,15 @@ describe('WallDrawing', () => {
     expect(html).toMatch(/data-role="baseboard"/);
   });
 
+  it('draws the casing around a door, from its outside edge', () => {
+    const wall = e.takeoff.rooms[0]!.walls[1]!;
+    const door = wall.openings.find((o) => o.kind === 'door')!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" />);
+    // Casing 2-1/4 in on both sides (docs/sources.md §30): the 32 in door + 4.5 = 36.5 in wide, from 2.25 in left of it.
+    expect(door.casingWidth).toBe(2.25);
+    expect(html).toMatch(new RegExp(`data-part="casing" x="${door.offset - 2.25}"[^>]*width="${door.width + 4.5}"`));
+  });
+
   it('shows the ripped last board', () => {
     const project = sampleProject();
     project.rooms[1]!.walls[0]!.length = 146;

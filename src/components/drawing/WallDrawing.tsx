@@ -126,6 +126,31 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
         ))}
       </g>
 
+      {/* Casings around doors and windows: the treatment stops at their outside edge. */}
+      <g className="casings">
+        {wall.openings
+          .filter((o) => (o.casingWidth ?? 0) > 0)
+          .map((o, i) => {
+            const c = o.casingWidth ?? 0;
+            const x0 = Math.max(0, o.offset - c);
+            const x1 = Math.min(L, o.offset + o.width + c);
+            return (
+              <rect
+                key={i}
+                data-part="casing"
+                x={r(x0)}
+                y={y(o.sillHeight + o.height + c)}
+                width={r(x1 - x0)}
+                height={r(o.height + c)}
+                fill={PAPER}
+                stroke={INK}
+                strokeWidth={0.75}
+                vectorEffect="non-scaling-stroke"
+              />
+            );
+          })}
+      </g>
+
       {/* Doors and windows are left open (white), outlined in ink. */}
       <g className="openings">
         {wall.openings.map((o, i) => (

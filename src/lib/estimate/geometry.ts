@@ -62,12 +62,12 @@ export const OPENING_SPACING = 3;
 type Placed = Omit<PlacedOpening, 'inBand'>;
 type Loose = Omit<PlacedOpening, 'inBand' | 'offset'>;
 
-/** Measured openings keep their place; counted ones are listed in the order given, sizes filled in. */
-function splitOpenings(openings: Opening[]): { fixed: Placed[]; loose: Loose[] } {
+/** Measured openings keep their place; counted ones are listed in the order given, sizes and casings filled in. */
+function splitOpenings(openings: Opening[], defaultCasing: number): { fixed: Placed[]; loose: Loose[] } {
   const fixed: Placed[] = [];
   const loose: Loose[] = [];
   for (const o of openings) {
-    const size = openingSize(o);
+    const size = { ...openingSize(o), casingWidth: o.casingWidth ?? defaultCasing };
     for (let i = 0; i < o.count; i++) {
       if (o.offset !== undefined && o.count === 1) fixed.push({ kind: o.kind, offset: o.offset, ...size });
       else loose.push({ kind: o.kind, ...size, assumed: true });
@@ -81,40 +81,50 @@ export type OpeningPlacement = { ok: true; openings: Placed[] } | { ok: false; f
 /**
  * Expands counted openings and gives each a place: measured offsets are kept; each counted one goes,
  * in the order given, into the first free stretch (between the wall ends and the measured openings)
- * that holds it with OPENING_SPACING on both sides, OPENING_SPACING after the one before it.
+ * that holds it with OPENING_SPACING on both sides, OPENING_SPACING after the one before it. Where
+ * casings are wider than that, the gap grows so that no casing runs past a wall end or onto its
+ * neighbour's casing: the gap between two openings is at least the sum of their casings.
  *
  * The places depend only on the openings, never on the wall's length: a longer wall keeps every
  * opening where it was and only gains wall at its right end, so it never needs less material (spread
  * evenly, an opening would slide along the boards or battens as the wall grows, and a board that was
  * needed beside it could disappear). Not ok when some do not fit; validation refuses such a wall.
  */
-export function tryPlaceOpenings(openings: Opening[], wallLength: number): OpeningPlacement {
-  const { fixed, loose } = splitOpenings(openings);
+export function tryPlaceOpenings(openings: Opening[], wallLength: number, defaultCasing = 0): OpeningPlacement {
+  const { fixed, loose } = splitOpenings(openings, defaultCasing);
   const free = subtractIntervals(
     [0, wallLength],
     fixed.map((f) => [f.offset, f.offset + f.width] as const),
     0,
   );
+  // The casing of the measured opening that ends (or starts) a free stretch; 0 at a wall end.
+  const casingAt = (edge: number, side: 'right' | 'left'): number =>
+    Math.max(0, ...fixed.filter((f) => Math.abs((side === 'right' ? f.offset + f.width : f.offset) - edge) < 1e-6).map((f) => f.casingWidth ?? 0));
+  const rightCasing = free.map(([, b]) => casingAt(b, 'left'));
   const cursor = free.map(([a]) => a);
+  const cursorCasing = free.map(([a]) => casingAt(a, 'right'));
+  const gap = (c0: number, c1: number): number => Math.max(OPENING_SPACING, c0 + c1);
   const placed = [...fixed];
   const unplaced: Loose[] = [];
   for (const o of loose) {
-    const i = free.findIndex(([, b], k) => cursor[k]! + OPENING_SPACING + o.width + OPENING_SPACING <= b + EPS);
+    const c = o.casingWidth ?? 0;
+    const i = free.findIndex(([, b], k) => cursor[k]! + gap(cursorCasing[k]!, c) + o.width + gap(c, rightCasing[k]!) <= b + EPS);
     if (i < 0) {
       unplaced.push(o);
       continue;
     }
-    const offset = cursor[i]! + OPENING_SPACING;
+    const offset = cursor[i]! + gap(cursorCasing[i]!, c);
     placed.push({ ...o, offset });
     cursor[i] = offset + o.width;
+    cursorCasing[i] = c;
   }
   if (unplaced.length > 0) return { ok: false, free, unplaced };
   return { ok: true, openings: placed.sort((a, b) => a.offset - b.offset) };
 }
 
 /** The places of `tryPlaceOpenings` for a wall validation has already accepted. */
-export function placeOpenings(openings: Opening[], wallLength: number): Placed[] {
-  const placed = tryPlaceOpenings(openings, wallLength);
+export function placeOpenings(openings: Opening[], wallLength: number, defaultCasing = 0): Placed[] {
+  const placed = tryPlaceOpenings(openings, wallLength, defaultCasing);
   if (!placed.ok) throw new RangeError('placeOpenings: the openings do not fit on the wall; validate the project first');
   return placed.openings;
 }

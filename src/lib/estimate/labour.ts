@@ -76,6 +76,12 @@ export function labourAndVisits(takeoff: Takeoff, rateBook: RateBook): { lines: 
     sum((r) => r.capRailFeet),
     L.hoursPerFootCapRail,
   );
+  perFoot(
+    'back-band',
+    'Install back band at casings',
+    sum((r) => r.backBandFeet ?? 0),
+    L.hoursPerFootBackBand,
+  );
   // Install days count every hour so far (install, trim, cut-outs); painting comes on its own visits.
   const installHours = lines.reduce((a, l) => a + l.hours, 0);
   const painting = paintingLabour(takeoff, rateBook);

@@ -42,25 +42,27 @@ const diningRoom = (paint = true): ProjectInput => ({
 describe('a 12 × 14 ft dining room in flat-panel wainscot, primed once and painted twice', () => {
   // Hand-worked, demo rate book (invented demo rates; the rules are docs/sources.md §26–§27):
   // Band: top of the 5-1/4 in baseboard to the 36 in cap = 30.75 in.
-  //   Walls 168 + 144 + 168 + 144 = 624 in × 30.75 in ÷ 144 = 133.25 sq ft, less the 36 in door across the
-  //   band, 36 × 30.75 ÷ 144 = 7.6875 → 125.5625 sq ft of panelling. Cap rail 49 ft (14 + 9 + 14 + 12) at 1.5 in = 6.125 sq ft;
-  //   new baseboard 49 ft at 5.25 in = 21.4375 sq ft. Painted area 125.5625 + 6.125 + 21.4375 = 153.125 sq ft.
+  //   Walls 168 + 144 + 168 + 144 = 624 in × 30.75 in ÷ 144 = 133.25 sq ft, less the 36 in door and its
+  //   2-1/4 in casing on both sides (docs/sources.md §30), 40.5 in across the band: 40.5 × 30.75 ÷ 144 = 8.6484375
+  //   → 124.6015625 sq ft of panelling. Cap rail and new baseboard stop at the casing: 624 − 40.5 = 583.5 in
+  //   = 48.625 ft; cap rail at 1.5 in = 6.078125 sq ft, baseboard at 5.25 in = 21.2734375 sq ft.
+  //   Painted area 124.6015625 + 6.078125 + 21.2734375 = 151.953125 sq ft.
   // Painting (flat panel, factor 1; 80 sq ft per hour per coat):
-  //   prime 153.125 × 1 ÷ 80 = 1.914 h; paint 153.125 × 2 ÷ 80 = 3.828 h.
-  // Install, trim and cut-outs: 125.5625 ÷ 10 = 12.556 + 6 cut-outs × 0.25 = 1.5 + 1 return × 0.5
-  //   + 4 corners × 0.2 = 0.8 + 49 ft × (0.02 + 0.05 + 0.06) = 6.37 → 21.73 h ÷ 8 h per day = 2.7 → 3 install days.
+  //   prime 151.953125 × 1 ÷ 80 = 1.899 h; paint 151.953125 × 2 ÷ 80 = 3.799 h.
+  // Install, trim and cut-outs: 124.6016 ÷ 10 = 12.460 + 6 cut-outs × 0.25 = 1.5 + 1 return × 0.5
+  //   + 4 corners × 0.2 = 0.8 + 48.625 ft × (0.02 + 0.05 + 0.06) = 6.321 → 21.58 h ÷ 8 h per day = 2.7 → 3 install days.
   // Visits: 3 install + 1 caulk and fill + 1 primer coat + 2 paint coats = 7; set-up 7 × 1 h = 7 h
   //   (the old per-room rule charged 1 h for the one room).
-  // Containers: primer 153.125 ÷ 400 = 0.383 gal → 2 quarts $28 (a gallon is $35);
-  //   paint 153.125 × 2 ÷ 350 = 0.875 gal → 4 quarts $72 or 1 gallon $52 → 1 gallon.
+  // Containers: primer 151.953 ÷ 400 = 0.380 gal → 2 quarts $28 (a gallon is $35);
+  //   paint 151.953 × 2 ÷ 350 = 0.868 gal → 4 quarts $72 or 1 gallon $52 → 1 gallon.
   const e = estimate(diningRoom(), parseRateBook(rates()));
   const line = (label: string) => e.price.labour.find((l) => l.label === label)!;
 
   it('prices each coating per coat', () => {
-    expect(e.takeoff.paintSqFt).toBeCloseTo(153.125, 6);
-    expect(line('Prime (1 coat)').hours).toBeCloseTo(1.91, 2);
-    expect(line('Paint (2 coats)').hours).toBeCloseTo(3.83, 2);
-    expect(line('Paint (2 coats)').basis).toBe('153.1 sq ft × 2 coats ÷ 80 sq ft per hour per coat');
+    expect(e.takeoff.paintSqFt).toBeCloseTo(151.953125, 6);
+    expect(line('Prime (1 coat)').hours).toBeCloseTo(1.9, 2);
+    expect(line('Paint (2 coats)').hours).toBeCloseTo(3.8, 2);
+    expect(line('Paint (2 coats)').basis).toBe('152 sq ft × 2 coats ÷ 80 sq ft per hour per coat');
   });
 
   it('counts the visits and charges set-up on each', () => {
@@ -86,8 +88,8 @@ describe('a 12 × 14 ft dining room in flat-panel wainscot, primed once and pain
 
   it('shows litres to a metric firm', () => {
     const metric = estimate(diningRoom(), parseRateBook(rates((rb) => void (rb.units = 'metric'))));
-    // Source: NIST Handbook 44 Appendix C — 1 US gal = 3.785411784 L; 0.875 gal = 3.31 L, 1 gal = 3.79 L.
-    expect(metric.takeoff.materials.find((m) => m.id === 'paint')!.basis).toMatch(/= 3\.31 L; .*1 gallon \(3\.79 L\)$/);
+    // Source: NIST Handbook 44 Appendix C — 1 US gal = 3.785411784 L; 0.8683 gal = 3.29 L, 1 gal = 3.79 L.
+    expect(metric.takeoff.materials.find((m) => m.id === 'paint')!.basis).toMatch(/= 3\.29 L; .*1 gallon \(3\.79 L\)$/);
   });
 });
 

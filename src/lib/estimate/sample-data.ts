@@ -40,9 +40,12 @@ export function sampleRateBook(): RateBookInput {
         { id: 'base-5', name: '5-1/4 in primed baseboard, 16 ft', width: 5.25, thickness: 0.5625, length: 192, priceCents: 2600 },
         { id: 'cap-rail', name: 'Cap rail, 8 ft', width: 1.5, thickness: 1.125, length: 96, priceCents: 1300 },
         { id: 'frame-moulding', name: 'Panel moulding, 8 ft', width: 1.25, thickness: 0.5, length: 96, priceCents: 700 },
+        { id: 'back-band', name: 'Back band, 8 ft', width: 1.0625, thickness: 1.0625, length: 96, priceCents: 900 },
       ],
       baseboardId: 'base-5',
       capRailId: 'cap-rail',
+      casing: { width: 2.25, thickness: 0.6875 }, // demo values, the common stock casing (docs/sources.md §30)
+      backBandId: 'back-band',
       supplies: {
         brads: {
           name: '18-gauge brads, box of 1000',
@@ -172,6 +175,7 @@ export function sampleRateBook(): RateBookInput {
       hoursPerFootBaseboardRemoved: 0.02,
       hoursPerFootBaseboardInstalled: 0.05,
       hoursPerFootCapRail: 0.06,
+      hoursPerFootBackBand: 0.05, // demo value
       paintSqFtPerHour: 80,
       setupHoursPerVisit: 1,
       hoursPerDay: 8,

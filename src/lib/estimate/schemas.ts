@@ -62,6 +62,8 @@ export const openingSchema = z.strictObject({
   sillHeight: inches('Sill height', 0, 120).optional(),
   /** Distance from the wall's left end to the opening's left edge; set from the left end when left out. */
   offset: inches('Distance from the left end', 0, 1200).optional(),
+  /** Width of the casing around this opening, when it differs from the rate book's (0 = no casing). */
+  casingWidth: inches('Casing width', 0, 12).optional(),
 });
 
 export const wallSchema = z.strictObject({
@@ -361,6 +363,14 @@ export const catalogueSchema = z.strictObject({
   mouldings: z.array(mouldingStockSchema).max(50),
   baseboardId: stockId('Baseboard'),
   capRailId: stockId('Cap rail'),
+  /** A moulding run around a casing's outside edge where the new work stands proud of it (docs/sources.md §31). */
+  backBandId: stockId('Back band').optional(),
+  /**
+   * The casing usually found around doors and windows: its width stops the treatment short of the
+   * opening, its thickness is the face the new work must stay behind. Default 2-1/4 × 11/16 in:
+   * from memory, docs/sources.md §30.
+   */
+  casing: z.strictObject({ width: inches('Casing width', 0, 12), thickness: inches('Casing thickness', 0, 2) }).default({ width: 2.25, thickness: 0.6875 }),
   supplies: suppliesSchema,
   treatments: z.array(treatmentSchema).min(1, { error: 'The catalogue needs at least one treatment.' }).max(50),
 });
@@ -384,6 +394,7 @@ export const rateBookSchema = z
       hoursPerFootBaseboardRemoved: num('Time per foot of baseboard removed', 'hours', 0, 2),
       hoursPerFootBaseboardInstalled: num('Time per foot of baseboard installed', 'hours', 0, 2),
       hoursPerFootCapRail: num('Time per foot of cap rail', 'hours', 0, 2),
+      hoursPerFootBackBand: num('Time per foot of back band', 'hours', 0, 2).default(0),
       paintSqFtPerHour: num('Painting productivity', 'sq ft per hour', 1, 1000),
       /** Older rate books charged set-up per room; kept so they still parse, and used when the per-visit figure is missing. */
       setupHoursPerRoom: num('Set-up and clean-up per room', 'hours', 0, 24).optional(),
@@ -461,6 +472,7 @@ export const rateBookSchema = z
     );
     need(mouldings, c.baseboardId, ['catalogue', 'baseboardId'], 'moulding');
     need(mouldings, c.capRailId, ['catalogue', 'capRailId'], 'moulding');
+    need(mouldings, c.backBandId, ['catalogue', 'backBandId'], 'moulding');
     c.treatments.forEach((t, i) => {
       const p = (k: string): PropertyKey[] => ['catalogue', 'treatments', i, k];
       switch (t.kind) {

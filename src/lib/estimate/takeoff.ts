@@ -4,6 +4,8 @@
  */
 import { balancedPositions, balancedRun } from './balanced-run.ts';
 import { boardPositions, boardRun } from './board-run.ts';
+import { backBandRuns, CASING_REVEAL, newFaceThickness, proudOfCasing } from './build-up.ts';
+import { blockedAreaSqIn, casingBlock } from './casings.ts';
 import { cautionsFor } from './cautions.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
@@ -337,6 +339,36 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
   return { count, width: count ? widthSum / count : 0, height: count ? fh : 0 };
 }
 
+/**
+ * Where the new face stands proud of the casings on a wall's openings in the band: a back band around
+ * each (cut and counted as trim) when the rate book names one, otherwise a note. Returns its feet.
+ */
+function backBandAtCasings(ctx: WallContext, openings: PlacedOpening[], t: Treatment, label: string, units: Units, notes: string[]): number {
+  const cased = openings.filter((o) => o.inBand && (o.casingWidth ?? 0) > 0);
+  const face = newFaceThickness(t, ctx.catalogue);
+  const casing = ctx.catalogue.casing.thickness;
+  if (cased.length === 0 || proudOfCasing(face, casing) <= 0) return 0;
+  const why = `the new face (${formatLength(face, units)} thick) stands proud of the ${formatLength(casing, units)} casings, which it should stay ${formatLength(CASING_REVEAL, units)} behind`;
+  const band = ctx.catalogue.mouldings.find((m) => m.id === ctx.catalogue.backBandId);
+  if (!band) {
+    notes.push(`On ${label}, ${why}: the casings stand behind the new face and need a back band or furring, not priced here.`);
+    return 0;
+  }
+  let inches = 0;
+  for (const o of cased) {
+    for (const run of backBandRuns(o)) {
+      addCuts(ctx.reg.lengths, band.id, trimCuts(run, band.length, ctx.catalogue.trimEndAllowance));
+      inches += run;
+    }
+  }
+  const feet = inches / 12;
+  ctx.trimFeet += feet;
+  notes.push(
+    `On ${label}, ${why}, so a back band (${band.name}) goes around ${cased.length === 1 ? 'the casing' : `${cased.length} casings`}: ${Math.round(feet * 10) / 10} ft.`,
+  );
+  return feet;
+}
+
 function wallTakeoff(
   room: Room,
   wall: Wall,
@@ -345,30 +377,30 @@ function wallTakeoff(
   catalogue: Catalogue,
   reg: CutRegistry,
   units: Units,
-): { wall: WallTakeoff; trimFeet: number; caulkFeet: number } {
+): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number } {
   const length = wallLength(room, wall);
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
   const bandBottom = baseboard.width;
   const bandTop = bandTopFor(room);
   const wainscot = room.treatment.height === 'wainscot';
-  const openings: PlacedOpening[] = placeOpenings(wall.openings, length).map((o) => ({
-    ...o,
-    inBand: overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop) > 0,
-  }));
+  const openings: PlacedOpening[] = placeOpenings(wall.openings, length, catalogue.casing.width).map((o) => {
+    const block = casingBlock({ ...o, inBand: false }, length);
+    return { ...o, inBand: overlap(block.sillHeight, block.sillHeight + block.height, bandBottom, bandTop) > 0 };
+  });
+  // Layouts, areas, boxes, caulk and returns see each opening with its casing: the treatment stops at
+  // the casing's outside edge, and an upright set beside an opening lands against the casing.
+  const blocks = openings.map((o) => casingBlock(o, length));
   const covers = coversWall(t);
-  const boxes = placeBoxes(wall, length, openings).map((b) => ({
+  const boxes = placeBoxes(wall, length, blocks).map((b) => ({
     ...b,
     covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, bandTop) > 0,
     capRailCrosses: wainscot && overlap(b.bottom, b.bottom + b.height, bandTop, bandTop + capRail.width) > 0,
   }));
   const coveredHeight = bandTop - bandBottom;
   const grossSqIn = length * coveredHeight;
-  const openingsSqIn = openings.reduce(
-    (s, o) => s + overlap(o.offset, o.offset + o.width, 0, length) * overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop),
-    0,
-  );
-  const ctx: WallContext = { length, bandBottom, bandTop, openings, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
+  const openingsSqIn = blockedAreaSqIn(blocks, length, bandBottom, bandTop);
+  const ctx: WallContext = { length, bandBottom, bandTop, openings: blocks, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
   const notes: string[] = [];
   const label = wall.label ?? `Wall ${index + 1}`;
   let boards: BoardLayout | undefined;
@@ -426,7 +458,7 @@ function wallTakeoff(
   }
   if (room.replaceBaseboard) ctx.caulkFeet += baseboardFeet;
   // The edges of openings inside the band (the wall ends are counted per room, by its corners).
-  for (const o of openings) {
+  for (const o of blocks) {
     if (!o.inBand) continue;
     const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop);
     const across = (o.sillHeight > bandBottom ? o.width : 0) + (o.sillHeight + o.height < bandTop ? o.width : 0);
@@ -453,6 +485,7 @@ function wallTakeoff(
       `Some frame sides on ${label} are longer than the longest moulding (${formatLength(longest, units)}), so they are joined: ${ctx.joints === 1 ? 'one scarf joint' : `${ctx.joints} scarf joints`}.`,
     );
   }
+  const backBandFeet = backBandAtCasings(ctx, openings, t, label, units, notes);
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;
   const out: WallTakeoff = {
@@ -470,7 +503,7 @@ function wallTakeoff(
     cutOuts: covered,
     // A return wherever the treatment stops at an opening: in the covered band, or where the cap rail
     // runs into the opening and is returned at its edge (common practice, no source).
-    returns: openings.filter((o) => o.inBand || (wainscot && overlap(o.sillHeight, o.sillHeight + o.height, bandTop, bandTop + capRail.width) > 0)).length,
+    returns: blocks.filter((o) => o.inBand || (wainscot && overlap(o.sillHeight, o.sillHeight + o.height, bandTop, bandTop + capRail.width) > 0)).length,
     ...(boards ? { boards } : {}),
     ...(frames ? { frames } : {}),
     pieces: ctx.pieces,
@@ -478,7 +511,7 @@ function wallTakeoff(
     baseboardFeet,
     notes,
   };
-  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet };
+  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet };
 }
 
 function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
@@ -487,10 +520,12 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
   let trimFeet = 0;
   let caulkFeet = 0;
+  let backBandFeet = 0;
   const walls = room.walls.map((w, i) => {
     const wt = wallTakeoff(room, w, i, t, catalogue, reg, units);
     trimFeet += wt.trimFeet;
     caulkFeet += wt.caulkFeet;
+    backBandFeet += wt.backBandFeet;
     return wt.wall;
   });
   const sum = (f: (w: WallTakeoff) => number): number => walls.reduce((s, w) => s + f(w), 0);
@@ -529,6 +564,7 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     capRailFeet,
     baseboardFeet,
     baseboardRemovedFeet,
+    ...(backBandFeet > 0 ? { backBandFeet } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
     // The old baseboard is taken to be as tall as the new one.
     disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,
@@ -552,7 +588,7 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
     // The same defaults the openings were placed with (geometry.ts), so the note tells what was drawn.
     const len = (x: number): string => formatLength(x, units);
     notes.push(
-      `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart.`,
+      `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart, or further where their casings need the room.`,
     );
   }
   for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));

@@ -16,6 +16,8 @@ export interface PlacedOpening {
   inBand: boolean;
   /** True when size or place were filled in with defaults rather than measured. */
   assumed: boolean;
+  /** Width of the casing around it (sides and head); the treatment stops at its outside edge. */
+  casingWidth?: number;
 }
 
 export interface PlacedBox {
@@ -96,6 +98,8 @@ export interface RoomTakeoff {
   capRailFeet: number;
   baseboardFeet: number;
   baseboardRemovedFeet: number;
+  /** Back band added around casings the new work stands proud of (docs/sources.md §31). */
+  backBandFeet?: number;
   /** Painted surface disturbed by the work (removed baseboard counts in full), for the lead-safe rule. */
   disturbedPaintSqFt: number;
   /** Area of boards or sheets glued and nailed to the wall (drives adhesive, brads and filler). */
@@ -154,7 +158,7 @@ export interface Takeoff {
 }
 
 export interface LabourLine {
-  task: 'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'paint' | 'setup';
+  task: 'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'back-band' | 'paint' | 'setup';
   label: string;
   hours: number;
   basis: string;

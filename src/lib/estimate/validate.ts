@@ -86,14 +86,14 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
       }
       if (Object.keys(fields).length > errorsBefore) return;
       // Counted openings must each find room beside the measured ones, not just add up to less than the wall.
-      const placement = tryPlaceOpenings(wall.openings, length);
+      const placement = tryPlaceOpenings(wall.openings, length, catalogue.casing.width);
       if (!placement.ok) {
         const kinds = (list: Array<{ kind: string; width: number }>): string =>
           list.map((o) => `${o.kind === 'door' ? 'a door' : 'a window'} ${len(o.width)} wide`).join(', ');
         const free = placement.free.filter(([a, b]) => b - a >= 0.01).map(([a, b]) => len(b - a));
         bad(
           `${wp}.openings`,
-          `The doors and windows without a distance from the left end do not fit on this ${len(length)} wall beside the others: no room for ${kinds(placement.unplaced)} (each needs ${len(OPENING_SPACING)} clear on both sides; the free stretches are ${free.join(', ') || 'none'}). Give each opening its distance from the left end, or check the count.`,
+          `The doors and windows without a distance from the left end do not fit on this ${len(length)} wall beside the others: no room for ${kinds(placement.unplaced)} (each needs ${len(OPENING_SPACING)} clear on both sides, and room for its casing; the free stretches are ${free.join(', ') || 'none'}). Give each opening its distance from the left end, or check the count.`,
         );
       }
     });

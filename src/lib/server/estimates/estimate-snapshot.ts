@@ -19,6 +19,7 @@ const placedOpening = z.object({
   sillHeight: num,
   inBand: z.boolean(),
   assumed: z.boolean(),
+  casingWidth: num.optional(),
 });
 
 const placedBox = z.object({
@@ -91,6 +92,7 @@ const roomTakeoff = z.object({
   capRailFeet: num,
   baseboardFeet: num,
   baseboardRemovedFeet: num,
+  backBandFeet: num.optional(),
   disturbedPaintSqFt: num,
   panelSqFt: num,
   trimFeet: num,
@@ -139,7 +141,7 @@ const takeoff = z.object({
 });
 
 const labourLine = z.object({
-  task: z.enum(['install', 'cut-outs', 'returns', 'corners', 'baseboard-removal', 'baseboard', 'cap-rail', 'paint', 'setup']),
+  task: z.enum(['install', 'cut-outs', 'returns', 'corners', 'baseboard-removal', 'baseboard', 'cap-rail', 'back-band', 'paint', 'setup']),
   label: str,
   hours: num,
   basis: str,
