@@ -161,6 +161,7 @@ export function sampleRateBook(): RateBookInput {
       paintSqFtPerHour: 80,
       setupHoursPerVisit: 1,
       hoursPerDay: 8,
+      hoursPerFixture: { tub: 0.5, shower: 0.5, vanity: 1, 'built-in': 1, toilet: 1.5, radiator: 2 },
     },
     extras: {
       leadSafe: { perJobCents: 25000, perRoomCents: 15000, everyPre1978Job: false },

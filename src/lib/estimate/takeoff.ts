@@ -4,6 +4,7 @@
  */
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
+import { blockedBy, tryPlaceFixtures } from './fixtures.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
@@ -327,6 +328,14 @@ function wallTakeoff(
     ...o,
     inBand: overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop) > 0,
   }));
+  const placedFixtures = tryPlaceFixtures(wall.fixtures, length, openings);
+  const fixtures = placedFixtures.ok ? placedFixtures.fixtures : [];
+  // A fixture the treatment stops at is laid out like an opening from the floor (not a door or
+  // window, so no return or caulk at its edges is counted here; the scribing is its own labour).
+  const fixtureBlocks: PlacedOpening[] = fixtures.flatMap((f) => {
+    const b = blockedBy(f, room.ceilingHeight);
+    return b ? [{ kind: 'window' as const, ...b, inBand: overlap(b.sillHeight, b.sillHeight + b.height, bandBottom, bandTop) > 0, assumed: f.assumed }] : [];
+  });
   const covers = coversWall(t);
   const boxes = placeBoxes(wall, length, openings).map((b) => ({
     ...b,
@@ -339,7 +348,19 @@ function wallTakeoff(
     (s, o) => s + overlap(o.offset, o.offset + o.width, 0, length) * overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop),
     0,
   );
-  const ctx: WallContext = { length, bandBottom, bandTop, openings, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
+  const fixturesSqIn = fixtureBlocks.reduce((s, o) => s + o.width * overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop), 0);
+  const ctx: WallContext = {
+    length,
+    bandBottom,
+    bandTop,
+    openings: [...openings, ...fixtureBlocks],
+    pieces: [],
+    reg,
+    catalogue,
+    trimFeet: 0,
+    caulkFeet: 0,
+    joints: 0,
+  };
   const notes: string[] = [];
   const label = wall.label ?? `Wall ${index + 1}`;
   let boards: BoardLayout | undefined;
@@ -430,8 +451,9 @@ function wallTakeoff(
     coveredHeight,
     grossSqFt: grossSqIn / 144,
     openingsSqFt: openingsSqIn / 144,
-    netSqFt: (grossSqIn - openingsSqIn) / 144,
+    netSqFt: (grossSqIn - openingsSqIn - fixturesSqIn) / 144,
     openings,
+    ...(fixtures.length > 0 ? { fixtures, fixturesSqFt: fixturesSqIn / 144 } : {}),
     boxes,
     cutOuts: covered,
     // A return wherever the treatment stops at an opening: in the covered band, or where the cap rail

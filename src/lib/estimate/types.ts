@@ -18,6 +18,18 @@ export interface PlacedOpening {
   assumed: boolean;
 }
 
+export interface PlacedFixture {
+  kind: 'tub' | 'shower' | 'vanity' | 'toilet' | 'radiator' | 'built-in';
+  /** From the wall's left end to the fixture's left edge. */
+  offset: number;
+  width: number;
+  height: number;
+  /** 'stops': the treatment stops at it; 'behind': it comes off and is set back over the treatment. */
+  placement: 'stops' | 'behind';
+  /** True when size or place were filled in with defaults rather than measured. */
+  assumed: boolean;
+}
+
 export interface PlacedBox {
   kind: 'outlet' | 'switch';
   offset: number;
@@ -63,6 +75,9 @@ export interface WallTakeoff {
   openingsSqFt: number;
   netSqFt: number;
   openings: PlacedOpening[];
+  /** Fixtures on the wall, placed; the area the stopping ones keep uncovered is `fixturesSqFt`. */
+  fixtures?: PlacedFixture[];
+  fixturesSqFt?: number;
   boxes: PlacedBox[];
   cutOuts: number;
   returns: number;
@@ -125,7 +140,7 @@ export interface MaterialLine {
 }
 
 export interface Caution {
-  id: 'electrical-boxes' | 'cap-rail-box' | 'lead-safe' | 'damp-room' | 'wet-zone' | 'ladder' | 'tools';
+  id: 'electrical-boxes' | 'cap-rail-box' | 'lead-safe' | 'damp-room' | 'wet-zone' | 'ladder' | 'tools' | 'fixture-trades';
   title: string;
   text: string;
   rooms: string[];
@@ -152,7 +167,8 @@ export interface Takeoff {
 }
 
 export interface LabourLine {
-  task: 'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'paint' | 'setup';
+  task:
+    'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'paint' | 'setup' | 'fixture-reset' | 'fixture-scribe';
   label: string;
   hours: number;
   basis: string;

@@ -21,6 +21,15 @@ const placedOpening = z.object({
   assumed: z.boolean(),
 });
 
+const placedFixture = z.object({
+  kind: z.enum(['tub', 'shower', 'vanity', 'toilet', 'radiator', 'built-in']),
+  offset: num,
+  width: num,
+  height: num,
+  placement: z.enum(['stops', 'behind']),
+  assumed: z.boolean(),
+});
+
 const placedBox = z.object({
   kind: z.enum(['outlet', 'switch']),
   offset: num,
@@ -60,6 +69,8 @@ const wallTakeoff = z.object({
   openingsSqFt: num,
   netSqFt: num,
   openings: z.array(placedOpening),
+  fixtures: z.array(placedFixture).optional(),
+  fixturesSqFt: num.optional(),
   boxes: z.array(placedBox),
   cutOuts: num,
   returns: num,
@@ -112,7 +123,7 @@ const materialLine = z.object({
 });
 
 const caution = z.object({
-  id: z.enum(['electrical-boxes', 'cap-rail-box', 'lead-safe', 'damp-room', 'wet-zone', 'ladder', 'tools']),
+  id: z.enum(['electrical-boxes', 'cap-rail-box', 'lead-safe', 'damp-room', 'wet-zone', 'ladder', 'tools', 'fixture-trades']),
   title: str,
   text: str,
   rooms: z.array(str),
@@ -138,7 +149,19 @@ const takeoff = z.object({
 });
 
 const labourLine = z.object({
-  task: z.enum(['install', 'cut-outs', 'returns', 'corners', 'baseboard-removal', 'baseboard', 'cap-rail', 'paint', 'setup']),
+  task: z.enum([
+    'install',
+    'cut-outs',
+    'returns',
+    'corners',
+    'baseboard-removal',
+    'baseboard',
+    'cap-rail',
+    'paint',
+    'setup',
+    'fixture-reset',
+    'fixture-scribe',
+  ]),
   label: str,
   hours: num,
   basis: str,
