@@ -39,9 +39,13 @@ export function sampleRateBook(): RateBookInput {
         { id: 'base-5', name: '5-1/4 in primed baseboard, 16 ft', width: 5.25, thickness: 0.5625, length: 192, priceCents: 2600 },
         { id: 'cap-rail', name: 'Cap rail, 8 ft', width: 1.5, thickness: 1.125, length: 96, priceCents: 1300 },
         { id: 'frame-moulding', name: 'Panel moulding, 8 ft', width: 1.25, thickness: 0.5, length: 96, priceCents: 700 },
+        { id: 'corner-in', name: 'Inside corner moulding, 8 ft', width: 0.75, thickness: 0.75, length: 96, priceCents: 500 },
+        { id: 'corner-out', name: 'Outside corner moulding, 8 ft', width: 1.125, thickness: 1.125, length: 96, priceCents: 700 },
       ],
       baseboardId: 'base-5',
       capRailId: 'cap-rail',
+      insideCornerTrimId: 'corner-in',
+      outsideCornerTrimId: 'corner-out',
       supplies: {
         brads: { name: '18-gauge brads, box of 1000', perBox: 1000, perSqFt: 2.5, perFootOfTrim: 1.5, priceCents: 900 },
         adhesive: { name: 'Construction adhesive, 10 fl oz', fluidOunces: 10, bead: 0.25, feetPerSqFt: 0.5, priceCents: 650 },

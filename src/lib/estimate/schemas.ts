@@ -343,6 +343,9 @@ export const catalogueSchema = z.strictObject({
   mouldings: z.array(mouldingStockSchema).max(50),
   baseboardId: stockId('Baseboard'),
   capRailId: stockId('Cap rail'),
+  /** Mouldings set in each inside and outside corner, the band's height; none when left out. */
+  insideCornerTrimId: stockId('Inside corner trim').optional(),
+  outsideCornerTrimId: stockId('Outside corner trim').optional(),
   supplies: suppliesSchema,
   treatments: z.array(treatmentSchema).min(1, { error: 'The catalogue needs at least one treatment.' }).max(50),
 });
@@ -452,6 +455,8 @@ export const rateBookSchema = z
     );
     need(mouldings, c.baseboardId, ['catalogue', 'baseboardId'], 'moulding');
     need(mouldings, c.capRailId, ['catalogue', 'capRailId'], 'moulding');
+    need(mouldings, c.insideCornerTrimId, ['catalogue', 'insideCornerTrimId'], 'moulding');
+    need(mouldings, c.outsideCornerTrimId, ['catalogue', 'outsideCornerTrimId'], 'moulding');
     c.treatments.forEach((t, i) => {
       const p = (k: string): PropertyKey[] => ['catalogue', 'treatments', i, k];
       switch (t.kind) {

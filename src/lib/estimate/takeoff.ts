@@ -4,6 +4,7 @@
  */
 import { boardPositions, boardRun } from './board-run.ts';
 import { cautionsFor } from './cautions.ts';
+import { defaultInsideCorners } from './corners.ts';
 import { blockedBy, tryPlaceFixtures } from './fixtures.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
@@ -488,14 +489,23 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const baseboardRemovedFeet = room.replaceBaseboard ? baseboardFeet : 0;
   trimFeet += capRailFeet + (room.replaceBaseboard ? baseboardFeet : 0);
   const n = walls.length;
-  // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
-  const insideCorners = room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1));
+  const insideCorners = room.insideCorners ?? defaultInsideCorners(room.walls);
   const outsideCorners = room.outsideCorners ?? 0;
   // Each corner is one joint where two walls' work meets; every wall end that is not at a corner is
   // a joint of its own: 2n ends, two at each corner.
   const corners = Math.min(n, insideCorners + outsideCorners);
   const bandHeight = walls[0] ? walls[0].coveredHeight : 0;
   caulkFeet += ((2 * n - corners) * bandHeight) / 12;
+  // Corner trim the catalogue names: one piece per corner, the band's height (common practice, no source).
+  for (const [count, id] of [
+    [insideCorners, catalogue.insideCornerTrimId],
+    [outsideCorners, catalogue.outsideCornerTrimId],
+  ] as const) {
+    const trim = id === undefined ? undefined : catalogue.mouldings.find((m) => m.id === id);
+    if (!trim || count === 0 || bandHeight <= 0) continue;
+    for (let i = 0; i < count; i++) addCuts(reg.lengths, trim.id, trimCuts(bandHeight, trim.length, catalogue.trimEndAllowance));
+    trimFeet += (count * bandHeight) / 12;
+  }
   const panelSqFt = coversWall(t) ? netSqFt : 0;
   const paintSqFt = paint ? netSqFt + (capRailFeet * capRail.width + (room.replaceBaseboard ? baseboardFeet * baseboard.width : 0)) / 12 : 0;
   return {
