@@ -338,7 +338,7 @@ function wallTakeoff(
     return b ? [{ kind: 'window' as const, ...b, inBand: overlap(b.sillHeight, b.sillHeight + b.height, bandBottom, bandTop) > 0, assumed: f.assumed }] : [];
   });
   const covers = coversWall(t);
-  const boxes = placeBoxes(wall, length, openings).map((b) => ({
+  const boxes = placeBoxes(wall, length, [...openings, ...fixtureBlocks]).map((b) => ({
     ...b,
     covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, bandTop) > 0,
     capRailCrosses: wainscot && overlap(b.bottom, b.bottom + b.height, bandTop, bandTop + capRail.width) > 0,
