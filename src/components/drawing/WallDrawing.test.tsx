@@ -51,3 +51,14 @@ describe('WallDrawing', () => {
     expect(html).toContain('class="ripped"');
   });
 });
+
+describe('WallDrawing fixtures', () => {
+  it('outlines and labels a fixture on the wall', () => {
+    const project = sampleProject();
+    project.rooms[1]!.walls[0]!.fixtures = [{ kind: 'radiator', offset: 10 }];
+    const wall = estimate(project, rateBook).takeoff.rooms[1]!.walls[0]!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" />);
+    expect(html).toMatch(/<g data-kind="radiator" data-placement="behind"><rect x="10" y="72" width="36" height="24"/); // 96 − 24 = 72
+    expect(html).toContain('>radiator</text>');
+  });
+});

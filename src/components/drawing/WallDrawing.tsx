@@ -170,6 +170,30 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
         ))}
       </g>
 
+      {/* Fixtures as a labelled outline: the treatment stops at some and runs behind others. */}
+      {wall.fixtures && wall.fixtures.length > 0 && (
+        <g className="fixtures">
+          {wall.fixtures.map((f, i) => (
+            <g key={i} data-kind={f.kind} data-placement={f.placement}>
+              <rect
+                x={r(f.offset)}
+                y={y(f.height)}
+                width={r(f.width)}
+                height={r(f.height)}
+                fill="none"
+                stroke={SLATE}
+                strokeWidth={1}
+                strokeDasharray="2 2"
+                vectorEffect="non-scaling-stroke"
+              />
+              <text x={r(f.offset + f.width / 2)} y={r(y(f.height / 2))} fontSize={r(font * 0.8)} textAnchor="middle" fill={SLATE}>
+                {f.kind}
+              </text>
+            </g>
+          ))}
+        </g>
+      )}
+
       {/* Outlet and switch cut-outs as small outlined rectangles. */}
       <g className="boxes">
         {wall.boxes.map((b, i) => (

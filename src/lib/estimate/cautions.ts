@@ -1,4 +1,5 @@
 /** Safety cautions that apply to a project, each deferring to local codes and licensed professionals. */
+import { fixtureCautions } from './fixture-cautions.ts';
 import type { Catalogue, Project } from './schemas.ts';
 import type { Caution, RoomTakeoff } from './types.ts';
 
@@ -115,6 +116,7 @@ export function cautionsFor(project: Project, rooms: RoomTakeoff[], catalogue: C
     });
   }
 
+  out.push(...fixtureCautions(rooms));
   out.push({
     id: 'tools',
     title: 'Saws, nailers and dust',

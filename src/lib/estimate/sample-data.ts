@@ -41,11 +41,15 @@ export function sampleRateBook(): RateBookInput {
         { id: 'cap-rail', name: 'Cap rail, 8 ft', width: 1.5, thickness: 1.125, length: 96, priceCents: 1300 },
         { id: 'frame-moulding', name: 'Panel moulding, 8 ft', width: 1.25, thickness: 0.5, length: 96, priceCents: 700 },
         { id: 'back-band', name: 'Back band, 8 ft', width: 1.0625, thickness: 1.0625, length: 96, priceCents: 900 },
+        { id: 'corner-in', name: 'Inside corner moulding, 8 ft', width: 0.75, thickness: 0.75, length: 96, priceCents: 500 },
+        { id: 'corner-out', name: 'Outside corner moulding, 8 ft', width: 1.125, thickness: 1.125, length: 96, priceCents: 700 },
       ],
       baseboardId: 'base-5',
       capRailId: 'cap-rail',
       casing: { width: 2.25, thickness: 0.6875 }, // demo values, the common stock casing (docs/sources.md §30)
       backBandId: 'back-band',
+      insideCornerTrimId: 'corner-in',
+      outsideCornerTrimId: 'corner-out',
       supplies: {
         brads: {
           name: '18-gauge brads, box of 1000',
@@ -179,6 +183,7 @@ export function sampleRateBook(): RateBookInput {
       paintSqFtPerHour: 80,
       setupHoursPerVisit: 1,
       hoursPerDay: 8,
+      hoursPerFixture: { tub: 0.5, shower: 0.5, vanity: 1, 'built-in': 1, toilet: 1.5, radiator: 2 },
     },
     extras: {
       leadSafe: { perJobCents: 25000, perRoomCents: 15000, everyPre1978Job: false },

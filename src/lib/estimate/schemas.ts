@@ -52,6 +52,17 @@ export const OPENING_KINDS = ['door', 'window'] as const;
 export const MEASURED_BY = ['homeowner-estimate', 'homeowner-tape', 'site-measure'] as const;
 export const BUILT_BEFORE_1978 = ['yes', 'no', 'not-sure'] as const;
 export const TREATMENT_HEIGHTS = ['wainscot', 'full'] as const;
+export const FIXTURE_KINDS = ['tub', 'shower', 'vanity', 'toilet', 'radiator', 'built-in'] as const;
+export type FixtureKind = (typeof FIXTURE_KINDS)[number];
+
+/** A fixture that takes wall length; sizes and whether the treatment stops at it are in fixtures.ts. */
+export const fixtureSchema = z.strictObject({
+  kind: choice('Fixture kind', FIXTURE_KINDS),
+  width: inches('Fixture width', 6, 240).optional(),
+  height: inches('Fixture height', 6, 144).optional(),
+  /** Distance from the wall's left end to the fixture's left edge; set from the left end when left out. */
+  offset: inches('Fixture distance from the left end', 0, 1200).optional(),
+});
 
 export const openingSchema = z.strictObject({
   kind: choice('Opening kind', OPENING_KINDS),
@@ -74,6 +85,7 @@ export const wallSchema = z.strictObject({
   openings: z.array(openingSchema, { error: 'Openings must be a list.' }).max(16, { error: 'At most 16 openings per wall.' }).default([]),
   outlets: count('Number of outlets', 40).default(0),
   switches: count('Number of switches', 40).default(0),
+  fixtures: z.array(fixtureSchema, { error: 'Fixtures must be a list.' }).max(8, { error: 'At most 8 fixtures per wall.' }).default([]),
 });
 
 export const roomTreatmentSchema = z.strictObject({
@@ -371,6 +383,9 @@ export const catalogueSchema = z.strictObject({
    * from memory, docs/sources.md §30.
    */
   casing: z.strictObject({ width: inches('Casing width', 0, 12), thickness: inches('Casing thickness', 0, 2) }).default({ width: 2.25, thickness: 0.6875 }),
+  /** Mouldings set in each inside and outside corner, the band's height; none when left out. */
+  insideCornerTrimId: stockId('Inside corner trim').optional(),
+  outsideCornerTrimId: stockId('Outside corner trim').optional(),
   supplies: suppliesSchema,
   treatments: z.array(treatmentSchema).min(1, { error: 'The catalogue needs at least one treatment.' }).max(50),
 });
@@ -402,6 +417,15 @@ export const rateBookSchema = z
       setupHoursPerVisit: num('Set-up and clean-up per visit', 'hours', 0, 24).optional(),
       /** Working hours in one install day, for counting install visits. */
       hoursPerDay: num('Working hours per day', 'hours', 1, 24).default(8),
+      /** Time per fixture, by kind: remove and reset (toilet, radiator) or scribe to it (the others). */
+      hoursPerFixture: z
+        .strictObject(
+          Object.fromEntries(FIXTURE_KINDS.map((k) => [k, num(`Time per fixture (${k})`, 'hours', 0, 24).optional()])) as Record<
+            FixtureKind,
+            z.ZodOptional<ReturnType<typeof num>>
+          >,
+        )
+        .default({}),
     }),
     extras: z.strictObject({
       leadSafe: z.strictObject({
@@ -473,6 +497,8 @@ export const rateBookSchema = z
     need(mouldings, c.baseboardId, ['catalogue', 'baseboardId'], 'moulding');
     need(mouldings, c.capRailId, ['catalogue', 'capRailId'], 'moulding');
     need(mouldings, c.backBandId, ['catalogue', 'backBandId'], 'moulding');
+    need(mouldings, c.insideCornerTrimId, ['catalogue', 'insideCornerTrimId'], 'moulding');
+    need(mouldings, c.outsideCornerTrimId, ['catalogue', 'outsideCornerTrimId'], 'moulding');
     c.treatments.forEach((t, i) => {
       const p = (k: string): PropertyKey[] => ['catalogue', 'treatments', i, k];
       switch (t.kind) {

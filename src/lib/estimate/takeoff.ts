@@ -7,6 +7,8 @@ import { boardPositions, boardRun } from './board-run.ts';
 import { backBandRuns, CASING_REVEAL, newFaceThickness, proudOfCasing } from './build-up.ts';
 import { blockedAreaSqIn, casingBlock } from './casings.ts';
 import { cautionsFor } from './cautions.ts';
+import { defaultInsideCorners } from './corners.ts';
+import { blockedBy, tryPlaceFixtures } from './fixtures.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, overlap, placeBoxes, placeOpenings, subtractIntervals, type Interval } from './geometry.ts';
 import { lengthKey, materialsFor, type CutRegistry } from './materials.ts';
 import type { BoardStock, Catalogue, Project, Room, SheetStock, Treatment, Wall } from './schemas.ts';
@@ -391,16 +393,37 @@ function wallTakeoff(
   // Layouts, areas, boxes, caulk and returns see each opening with its casing: the treatment stops at
   // the casing's outside edge, and an upright set beside an opening lands against the casing.
   const blocks = openings.map((o) => casingBlock(o, length));
+  const placedFixtures = tryPlaceFixtures(wall.fixtures, length, openings);
+  const fixtures = placedFixtures.ok ? placedFixtures.fixtures : [];
+  // A fixture the treatment stops at is laid out like an opening from the floor (not a door or
+  // window, so no return or caulk at its edges is counted here; the scribing is its own labour).
+  const fixtureBlocks: PlacedOpening[] = fixtures.flatMap((f) => {
+    const b = blockedBy(f, room.ceilingHeight);
+    return b ? [{ kind: 'window' as const, ...b, inBand: overlap(b.sillHeight, b.sillHeight + b.height, bandBottom, bandTop) > 0, assumed: f.assumed }] : [];
+  });
   const covers = coversWall(t);
-  const boxes = placeBoxes(wall, length, blocks).map((b) => ({
+  const boxes = placeBoxes(wall, length, [...blocks, ...fixtureBlocks]).map((b) => ({
     ...b,
     covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, bandTop) > 0,
     capRailCrosses: wainscot && overlap(b.bottom, b.bottom + b.height, bandTop, bandTop + capRail.width) > 0,
   }));
   const coveredHeight = bandTop - bandBottom;
   const grossSqIn = length * coveredHeight;
+  // Each stretch of wall comes off once, where casings and fixtures meet or overlap.
   const openingsSqIn = blockedAreaSqIn(blocks, length, bandBottom, bandTop);
-  const ctx: WallContext = { length, bandBottom, bandTop, openings: blocks, pieces: [], reg, catalogue, trimFeet: 0, caulkFeet: 0, joints: 0 };
+  const fixturesSqIn = blockedAreaSqIn([...blocks, ...fixtureBlocks], length, bandBottom, bandTop) - openingsSqIn;
+  const ctx: WallContext = {
+    length,
+    bandBottom,
+    bandTop,
+    openings: [...blocks, ...fixtureBlocks],
+    pieces: [],
+    reg,
+    catalogue,
+    trimFeet: 0,
+    caulkFeet: 0,
+    joints: 0,
+  };
   const notes: string[] = [];
   const label = wall.label ?? `Wall ${index + 1}`;
   let boards: BoardLayout | undefined;
@@ -497,8 +520,9 @@ function wallTakeoff(
     coveredHeight,
     grossSqFt: grossSqIn / 144,
     openingsSqFt: openingsSqIn / 144,
-    netSqFt: (grossSqIn - openingsSqIn) / 144,
+    netSqFt: (grossSqIn - openingsSqIn - fixturesSqIn) / 144,
     openings,
+    ...(fixtures.length > 0 ? { fixtures, fixturesSqFt: fixturesSqIn / 144 } : {}),
     boxes,
     cutOuts: covered,
     // A return wherever the treatment stops at an opening: in the covered band, or where the cap rail
@@ -535,14 +559,23 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const baseboardRemovedFeet = room.replaceBaseboard ? baseboardFeet : 0;
   trimFeet += capRailFeet + (room.replaceBaseboard ? baseboardFeet : 0);
   const n = walls.length;
-  // Four or more walls usually close a room; fewer are usually joined in a line. Common practice, no source.
-  const insideCorners = room.insideCorners ?? (n >= 4 ? n : Math.max(0, n - 1));
+  const insideCorners = room.insideCorners ?? defaultInsideCorners(room.walls);
   const outsideCorners = room.outsideCorners ?? 0;
   // Each corner is one joint where two walls' work meets; every wall end that is not at a corner is
   // a joint of its own: 2n ends, two at each corner.
   const corners = Math.min(n, insideCorners + outsideCorners);
   const bandHeight = walls[0] ? walls[0].coveredHeight : 0;
   caulkFeet += ((2 * n - corners) * bandHeight) / 12;
+  // Corner trim the catalogue names: one piece per corner, the band's height (common practice, no source).
+  for (const [count, id] of [
+    [insideCorners, catalogue.insideCornerTrimId],
+    [outsideCorners, catalogue.outsideCornerTrimId],
+  ] as const) {
+    const trim = id === undefined ? undefined : catalogue.mouldings.find((m) => m.id === id);
+    if (!trim || count === 0 || bandHeight <= 0) continue;
+    for (let i = 0; i < count; i++) addCuts(reg.lengths, trim.id, trimCuts(bandHeight, trim.length, catalogue.trimEndAllowance));
+    trimFeet += (count * bandHeight) / 12;
+  }
   const panelSqFt = coversWall(t) ? netSqFt : 0;
   const paintSqFt = paint ? netSqFt + (capRailFeet * capRail.width + (room.replaceBaseboard ? baseboardFeet * baseboard.width : 0)) / 12 : 0;
   return {

@@ -20,6 +20,18 @@ export interface PlacedOpening {
   casingWidth?: number;
 }
 
+export interface PlacedFixture {
+  kind: 'tub' | 'shower' | 'vanity' | 'toilet' | 'radiator' | 'built-in';
+  /** From the wall's left end to the fixture's left edge. */
+  offset: number;
+  width: number;
+  height: number;
+  /** 'stops': the treatment stops at it; 'behind': it comes off and is set back over the treatment. */
+  placement: 'stops' | 'behind';
+  /** True when size or place were filled in with defaults rather than measured. */
+  assumed: boolean;
+}
+
 export interface PlacedBox {
   kind: 'outlet' | 'switch';
   offset: number;
@@ -67,6 +79,9 @@ export interface WallTakeoff {
   openingsSqFt: number;
   netSqFt: number;
   openings: PlacedOpening[];
+  /** Fixtures on the wall, placed; the area the stopping ones keep uncovered is `fixturesSqFt`. */
+  fixtures?: PlacedFixture[];
+  fixturesSqFt?: number;
   boxes: PlacedBox[];
   cutOuts: number;
   returns: number;
@@ -131,7 +146,7 @@ export interface MaterialLine {
 }
 
 export interface Caution {
-  id: 'electrical-boxes' | 'cap-rail-box' | 'lead-safe' | 'damp-room' | 'wet-zone' | 'ladder' | 'tools';
+  id: 'electrical-boxes' | 'cap-rail-box' | 'lead-safe' | 'damp-room' | 'wet-zone' | 'ladder' | 'tools' | 'fixture-trades';
   title: string;
   text: string;
   rooms: string[];
@@ -158,7 +173,19 @@ export interface Takeoff {
 }
 
 export interface LabourLine {
-  task: 'install' | 'cut-outs' | 'returns' | 'corners' | 'baseboard-removal' | 'baseboard' | 'cap-rail' | 'back-band' | 'paint' | 'setup';
+  task:
+    | 'install'
+    | 'cut-outs'
+    | 'returns'
+    | 'corners'
+    | 'baseboard-removal'
+    | 'baseboard'
+    | 'cap-rail'
+    | 'back-band'
+    | 'paint'
+    | 'setup'
+    | 'fixture-reset'
+    | 'fixture-scribe';
   label: string;
   hours: number;
   basis: string;

@@ -1,5 +1,6 @@
 /** Checks on a project beyond its schema: things only the rate book or the wall's own numbers can tell. */
 import { EstimateInputError, fieldsFromZod } from './errors.ts';
+import { fixtureProblems } from './fixtures.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, tryPlaceOpenings } from './geometry.ts';
 import { projectSchema, rateBookSchema, type Catalogue, type Project, type RateBook } from './schemas.ts';
 import { formatLength, type Units } from './units.ts';
@@ -95,6 +96,8 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
           `${wp}.openings`,
           `The doors and windows without a distance from the left end do not fit on this ${len(length)} wall beside the others: no room for ${kinds(placement.unplaced)} (each needs ${len(OPENING_SPACING)} clear on both sides, and room for its casing; the free stretches are ${free.join(', ') || 'none'}). Give each opening its distance from the left end, or check the count.`,
         );
+      } else {
+        for (const [path, message] of Object.entries(fixtureProblems(wall.fixtures, length, placement.openings, wp, len))) bad(path, message);
       }
     });
   });

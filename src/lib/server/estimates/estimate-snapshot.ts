@@ -22,6 +22,15 @@ const placedOpening = z.object({
   casingWidth: num.optional(),
 });
 
+const placedFixture = z.object({
+  kind: z.enum(['tub', 'shower', 'vanity', 'toilet', 'radiator', 'built-in']),
+  offset: num,
+  width: num,
+  height: num,
+  placement: z.enum(['stops', 'behind']),
+  assumed: z.boolean(),
+});
+
 const placedBox = z.object({
   kind: z.enum(['outlet', 'switch']),
   offset: num,
@@ -62,6 +71,8 @@ const wallTakeoff = z.object({
   openingsSqFt: num,
   netSqFt: num,
   openings: z.array(placedOpening),
+  fixtures: z.array(placedFixture).optional(),
+  fixturesSqFt: num.optional(),
   boxes: z.array(placedBox),
   cutOuts: num,
   returns: num,
@@ -115,7 +126,7 @@ const materialLine = z.object({
 });
 
 const caution = z.object({
-  id: z.enum(['electrical-boxes', 'cap-rail-box', 'lead-safe', 'damp-room', 'wet-zone', 'ladder', 'tools']),
+  id: z.enum(['electrical-boxes', 'cap-rail-box', 'lead-safe', 'damp-room', 'wet-zone', 'ladder', 'tools', 'fixture-trades']),
   title: str,
   text: str,
   rooms: z.array(str),
@@ -141,7 +152,20 @@ const takeoff = z.object({
 });
 
 const labourLine = z.object({
-  task: z.enum(['install', 'cut-outs', 'returns', 'corners', 'baseboard-removal', 'baseboard', 'cap-rail', 'back-band', 'paint', 'setup']),
+  task: z.enum([
+    'install',
+    'cut-outs',
+    'returns',
+    'corners',
+    'baseboard-removal',
+    'baseboard',
+    'cap-rail',
+    'back-band',
+    'paint',
+    'setup',
+    'fixture-reset',
+    'fixture-scribe',
+  ]),
   label: str,
   hours: num,
   basis: str,
