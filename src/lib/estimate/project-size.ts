@@ -149,7 +149,9 @@ function wallPieces(room: Room, length: number, openings: Array<{ width: number;
 export function projectSize(project: Project, catalogue: Catalogue): ProjectSize {
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId);
   const rooms = project.rooms.map((room): RoomSize => {
-    const t = catalogue.treatments.find((x) => x.id === room.treatment.id);
+    const chosen = catalogue.treatments.find((x) => x.id === room.treatment.id);
+    // A damp room is laid out in the firm's damp-room alternative (damp-stock.ts), so bound that one.
+    const t = (room.damp && chosen?.dampRoomTreatmentId ? catalogue.treatments.find((x) => x.id === chosen.dampRoomTreatmentId) : undefined) ?? chosen;
     const size: RoomSize = { walls: room.walls.length, openings: 0, boxes: 0, coveredSqFt: 0, pieces: 0 };
     for (const wall of room.walls) {
       const length = wallLength(room, wall) ?? 0;

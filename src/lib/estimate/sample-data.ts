@@ -105,6 +105,7 @@ export function sampleRateBook(): RateBookInput {
           orientation: 'vertical',
           source: { from: 'sheet', sheetId: 'ply-4x8-quarter', stripWidth: 5.875 },
           gap: 0.125,
+          dampRoomTreatmentId: 'shiplap-vertical-mr',
         },
         {
           id: 'shiplap-horizontal',
@@ -167,6 +168,19 @@ export function sampleRateBook(): RateBookInput {
           frameGap: 4,
           targetFrameWidth: 30,
           fullHeightRows: 2,
+        },
+        {
+          // Offered only in damp rooms, in place of the plywood strips.
+          id: 'shiplap-vertical-mr',
+          kind: 'shiplap',
+          name: 'Vertical shiplap (moisture-resistant MDF strips)',
+          enabled: false,
+          sqFtPerHour: 16,
+          needsPrimer: true,
+          paintFactor: 1.3, // demo value, as above
+          orientation: 'vertical',
+          source: { from: 'sheet', sheetId: 'mr-mdf-4x8-half', stripWidth: 5.875 },
+          gap: 0.125,
         },
       ],
     },

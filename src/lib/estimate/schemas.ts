@@ -292,6 +292,11 @@ const treatmentCommon = {
    * ripped to fit) or balanced (both ends ripped to the same width; see balanced-run.ts).
    */
   layout: choice('Layout', ['from-left', 'balanced'] as const).default('from-left'),
+  /**
+   * The finish used instead in a room marked damp: another treatment of the same kind in the
+   * catalogue, made with moisture-resistant stock (it may be switched off for ordinary rooms).
+   */
+  dampRoomTreatmentId: slug('Treatment for damp rooms').optional(),
   /** Narrowest end board the owner accepts in a balanced layout; common practice, no source (about 1-1/2 in). */
   minEndWidth: inches('Narrowest end board', 0.25, 12).default(1.5),
 };
@@ -501,6 +506,19 @@ export const rateBookSchema = z
     need(mouldings, c.outsideCornerTrimId, ['catalogue', 'outsideCornerTrimId'], 'moulding');
     c.treatments.forEach((t, i) => {
       const p = (k: string): PropertyKey[] => ['catalogue', 'treatments', i, k];
+      if (t.dampRoomTreatmentId !== undefined) {
+        const alt = c.treatments.find((x) => x.id === t.dampRoomTreatmentId);
+        if (!alt)
+          ctx.addIssue({ code: 'custom', path: p('dampRoomTreatmentId'), message: `No treatment with id "${t.dampRoomTreatmentId}" in the catalogue.` });
+        else if (alt.id === t.id)
+          ctx.addIssue({ code: 'custom', path: p('dampRoomTreatmentId'), message: 'A treatment cannot be its own damp-room alternative.' });
+        else if (alt.kind !== t.kind)
+          ctx.addIssue({
+            code: 'custom',
+            path: p('dampRoomTreatmentId'),
+            message: `The damp-room alternative must be the same kind of treatment (${t.kind}).`,
+          });
+      }
       switch (t.kind) {
         case 'shiplap':
           if (t.source.from === 'sheet') {

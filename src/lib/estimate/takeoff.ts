@@ -17,6 +17,7 @@ import { stockCutFor, stockLengthsOf } from './stock-lengths.ts';
 import { staggeredRow } from './staggered-joints.ts';
 import { formatLength, type Units } from './units.ts';
 import { checkProjectSize } from './project-size.ts';
+import { treatmentForRoom } from './damp-stock.ts';
 import { validateProject } from './validate.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
@@ -539,7 +540,7 @@ function wallTakeoff(
 }
 
 function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
-  const t = catalogue.treatments.find((x) => x.id === room.treatment.id)!;
+  const { treatment: t, replaced } = treatmentForRoom(room, catalogue);
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
   let trimFeet = 0;
@@ -583,6 +584,7 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     treatmentId: t.id,
     treatmentName: t.name,
     treatmentKind: t.kind,
+    ...(replaced ? { dampAlternativeFor: replaced.id } : {}),
     height: room.treatment.height,
     ceilingHeight: room.ceilingHeight,
     bandTop: bandTopFor(room),
@@ -623,6 +625,14 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
     notes.push(
       `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart, or further where their casings need the room.`,
     );
+  }
+  for (const r of rooms) {
+    if (r.dampAlternativeFor) {
+      const chosen = catalogue.treatments.find((x) => x.id === r.dampAlternativeFor);
+      notes.push(
+        `${r.name} is a damp room, so it is priced in ${r.treatmentName.toLowerCase()} instead of ${chosen ? chosen.name.toLowerCase() : 'the finish chosen'}.`,
+      );
+    }
   }
   for (const r of rooms) for (const w of r.walls) notes.push(...w.notes.map((n) => `${r.name}: ${n}`));
   return {

@@ -98,6 +98,8 @@ export interface RoomTakeoff {
   treatmentId: string;
   treatmentName: string;
   treatmentKind: TreatmentKind;
+  /** In a damp room priced with the firm's moisture-resistant alternative: the treatment that was chosen. */
+  dampAlternativeFor?: string;
   height: 'wainscot' | 'full';
   ceilingHeight: number;
   bandTop: number;

@@ -89,6 +89,7 @@ const roomTakeoff = z.object({
   treatmentId: str,
   treatmentName: str,
   treatmentKind: z.enum(['shiplap', 'board-and-batten', 'beadboard', 'flat-panel', 'picture-frame']),
+  dampAlternativeFor: str.optional(),
   height: z.enum(['wainscot', 'full']),
   ceilingHeight: num,
   bandTop: num,
