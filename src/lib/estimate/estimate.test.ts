@@ -208,9 +208,10 @@ describe('properties of the price', () => {
     paint: fc.boolean(),
     measuredBy: fc.constantFrom('homeowner-estimate' as const, 'homeowner-tape' as const, 'site-measure' as const),
     photos: fc.integer({ min: 0, max: 3 }),
+    moreOutlets: fc.integer({ min: 1, max: 3 }),
   });
   type Grown = typeof grown extends fc.Arbitrary<infer T> ? T : never;
-  const room = (c: Grown, length: number, ceilingHeight: number, walls: number): ProjectInput => ({
+  const room = (c: Grown, length: number, ceilingHeight: number, walls: number, more: { wainscot?: number; outlets?: number } = {}): ProjectInput => ({
     rooms: [
       {
         name: 'Test room',
@@ -218,13 +219,13 @@ describe('properties of the price', () => {
         // The first wall carries the openings; the others are plain walls of the same length.
         walls: Array.from({ length: walls }, (_, i) => ({
           length,
-          outlets: c.outlets,
+          outlets: c.outlets + (more.outlets ?? 0),
           openings: i === 0 ? c.openings.map((o) => ({ ...o, ...(o.offset !== undefined ? { count: 1 } : {}) })) : [],
         })),
         treatment: {
           id: c.treatment,
           height: c.height,
-          ...(c.height === 'wainscot' && c.wainscotHeight !== undefined ? { wainscotHeight: c.wainscotHeight } : {}),
+          ...(c.height === 'wainscot' && c.wainscotHeight !== undefined ? { wainscotHeight: c.wainscotHeight + (more.wainscot ?? 0) } : {}),
         },
       },
     ],
@@ -247,9 +248,10 @@ describe('properties of the price', () => {
   // Property (common practice, no source): more wall never costs less — a longer wall, a taller one
   // (a higher ceiling), or more walls, for every treatment and height, with doors and windows
   // measured or only counted. `MORE_WALL_RUNS=5000 MORE_WALL_SEED=random` explores further.
-  // The default seed is fixed: long random runs still find rare counterexamples (about one case in
-  // 2,000: several fixed-width openings on one wall, a full-height picture-frame wall between two
-  // doors), which the estimate issue's remaining work is to remove; until then CI stays deterministic.
+  // The default seed is fixed. Long random runs found cut lists of more than 20 rails, stiles or
+  // boards whose heuristic count fell by one as a wall grew an inch (flat-panel 263 → 264 in, horizontal
+  // shiplap 360 → 361 in); stock-cutting.ts now searches those exactly. Random runs after that fix:
+  // 5,000 clean; taller-wainscot cases are not yet clean (see below), so CI stays deterministic.
   const moreWallSeed = process.env.MORE_WALL_SEED === 'random' ? undefined : Number(process.env.MORE_WALL_SEED ?? 20261202);
   fcTest.prop([grown], { numRuns: Number(process.env.MORE_WALL_RUNS ?? 120), ...(moreWallSeed === undefined ? {} : { seed: moreWallSeed }) })(
     'more wall never costs less',
@@ -261,6 +263,10 @@ describe('properties of the price', () => {
         room(c, c.length, c.ceiling + c.taller, c.walls),
         room(c, c.length, c.ceiling, c.walls + c.moreWalls),
         room(c, c.length + c.more, c.ceiling + c.taller, c.walls + c.moreWalls),
+        // More outlets on every wall. (A taller given wainscot is not checked yet: a picture-frame
+        // wainscot whose band rises past a window's sill still finds cheaper layouts, e.g. 24 → 25 in
+        // on a 60 in wall with a 44 × 24 in window at 20 in.)
+        room(c, c.length, c.ceiling, c.walls, { outlets: c.moreOutlets }),
       ]) {
         const b = priced(bigger);
         // Every opening that fits a wall fits a longer, taller one.

@@ -91,3 +91,44 @@ describe('stockPiecesNeeded', () => {
     },
   );
 });
+
+// Source: docs/sources.md §50 — the fewest stock lengths for a list never falls when a cut grows (a
+// plan for the longer cuts also yields the shorter ones), but first fit's count can; beyond 20 cuts the
+// count is searched exactly where the heuristics stop above the lower bound, so a wall's cut list
+// growing an inch never needs fewer lengths.
+describe('stockPiecesNeeded never falls when cuts grow', () => {
+  // Rails and stiles of a two-wall flat-panel wainscot whose first wall grows 263 → 264 in (three doors on it):
+  // 13 lengths were reported for the shorter wall's 38 cuts, 12 for the longer one's.
+  const flatPanel = (run: number): number[] => [...[1, 18, 82, run, 1, 18, 82, run, 96, 96, run + 6, 96, 96, run + 6], ...Array<number>(24).fill(11.75)];
+  it('the rails and stiles of a 263 in flat-panel wall need no more 8 ft lengths than a 264 in one', () => {
+    // The 264 in wall's cuts total 95' 4" + 38 kerfs = 1,148.75 in > 11 × 96.125, so 12 is the optimum;
+    // every cut of the 263 in wall is no longer than its partner, so 12 is enough for it too.
+    expect(stockPiecesNeeded(flatPanel(66), 96, 0.125)).toBe(12);
+    expect(stockPiecesNeeded(flatPanel(65), 96, 0.125)).toBe(12);
+  });
+  it('the 39 cuts of a 246 in flat-panel wall with five doors need no more lengths than the 247 in wall', () => {
+    const cuts = (d: number): number[] => [
+      ...[3, 3, 3, 29, 38, 32 + d, 3, 3, 3, 29, 38, 32 + d, 96, 96, 54 + d, 96, 96, 54 + d],
+      ...Array<number>(21).fill(19.75),
+    ];
+    expect(stockPiecesNeeded(cuts(1), 96, 0.125)).toBe(12);
+    expect(stockPiecesNeeded(cuts(0), 96, 0.125)).toBeLessThanOrEqual(stockPiecesNeeded(cuts(1), 96, 0.125));
+  });
+
+  fcTest.prop(
+    [
+      fc.array(fc.record({ length: fc.integer({ min: 2, max: 95 }), count: fc.integer({ min: 1, max: 14 }) }), { minLength: 2, maxLength: 6 }),
+      fc.nat(),
+      fc.integer({ min: 1, max: 6 }),
+      fc.constantFrom(0, 0.125),
+    ],
+    { numRuns: 100 },
+  )('a list of wall cuts with one length grown never needs fewer lengths', (groups, pick, grow, kerf) => {
+    const cuts = groups.flatMap((g) => Array<number>(g.count).fill(g.length));
+    fc.pre(cuts.length > 20);
+    const grown = groups
+      .map((g, i) => (i === pick % groups.length ? { ...g, length: Math.min(96, g.length + grow) } : g))
+      .flatMap((g) => Array<number>(g.count).fill(g.length));
+    expect(stockPiecesNeeded(grown, 96, kerf)).toBeGreaterThanOrEqual(stockPiecesNeeded(cuts, 96, kerf));
+  });
+});

@@ -3,7 +3,8 @@
  * Up to EXACT_LIMIT cuts: exact, by branch and bound. Beyond: the better of first-fit decreasing
  * (proven: FFD ≤ 11/9·OPT + 6/9, Dósa 2007) and a sequential pattern heuristic (repeat the pattern
  * that wastes least, after Haessler's sequential heuristic procedure, within a node budget) — both
- * feasible, so the answer is never below the true optimum and never worse than FFD.
+ * feasible, so the answer is never below the true optimum and never worse than FFD; and where that
+ * stops above the lower bound, an exact search over the distinct lengths within a node budget.
  */
 
 export const EXACT_LIMIT = 20;
@@ -14,6 +15,11 @@ const MAX_NODES = 2_000_000;
 // many thousands of different lengths would otherwise take seconds; past it, FFD's answer stands.
 const PATTERN_NODES = 20_000;
 const SEQUENTIAL_NODES = 500_000;
+// Node cap for the exact search on a list longer than EXACT_LIMIT (`fewestByFilling`), run only when
+// the heuristics stop above the lower bound: a heuristic's count can fall when a cut grows (first fit
+// places the longer cut differently), so a longer wall could need fewer lengths; the optimum never falls.
+const LONG_LIST_NODES = 60_000;
+const MAX_FILL_DEPTH = 2_000;
 
 function check(cuts: number[], stockLength: number, kerf: number): void {
   if (!(Number.isFinite(stockLength) && stockLength > 0)) throw new RangeError('stockPiecesNeeded: stockLength must be a positive number of inches');
@@ -50,14 +56,19 @@ function firstFitDecreasing(sizes: number[], cap: number): number[][] {
   return bins;
 }
 
+/** A lower bound on the bins: the total length, and the cuts longer than half a stock (one each). */
+function lowerBound(sizes: number[], cap: number): number {
+  const total = sizes.reduce((s, x) => s + x, 0);
+  return Math.max(1, Math.ceil(total / cap - EPS), sizes.filter((x) => x > cap / 2 + EPS).length);
+}
+
 /**
  * Exact minimum number of bins for a short list (sizes already kerf-grown), or null if no layout beats
  * `upper` (then `upper` is the minimum) or the search gave up (then `status.gaveUp` is set).
  */
 function exactBins(sizes: number[], cap: number, upper: number, status?: { gaveUp: boolean }): number[][] | null {
   const order = sizes.map((_, i) => i).sort((a, b) => sizes[b]! - sizes[a]!);
-  const total = sizes.reduce((s, x) => s + x, 0);
-  const lower = Math.max(1, Math.ceil(total / cap - EPS));
+  const lower = lowerBound(sizes, cap);
   let best = upper;
   let bestAssign: number[] | null = null;
   const room: number[] = [];
@@ -107,6 +118,72 @@ function exactBins(sizes: number[], cap: number, upper: number, status?: { gaveU
   const chosen: number[] = bestAssign;
   chosen.forEach((b, k) => bins[b]!.push(order[k]!));
   return bins;
+}
+
+/**
+ * Exact minimum for a long list with few distinct lengths (sizes kerf-grown), or null when the search
+ * gave up or found nothing below `upper`. Stock pieces are filled one at a time, each starting with
+ * the longest cut left and holding a maximal set of the rest (no cut left over would still fit), and
+ * the search stops once the offcuts so far exceed what a plan one piece shorter than the best can waste.
+ */
+function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: number): number | null {
+  const groups = new Map<number, number>();
+  for (const s of sizes) {
+    const key = Math.round(s * 1e6) / 1e6;
+    groups.set(key, (groups.get(key) ?? 0) + 1);
+  }
+  const len = [...groups.keys()].sort((a, b) => b - a);
+  const cnt = len.map((l) => groups.get(l)!);
+  // The search recurses once per distinct length per stock piece: keep it well inside the call stack.
+  if (upper * (len.length + 2) > MAX_FILL_DEPTH) return null;
+  const total = sizes.reduce((s, x) => s + x, 0);
+  const lower = lowerBound(sizes, cap);
+  let best = upper;
+  let nodes = 0;
+  let gaveUp = false;
+  const take = new Array<number>(len.length).fill(0);
+  const fill = (used: number, waste: number): void => {
+    if (gaveUp || best <= lower) return;
+    const first = cnt.findIndex((c) => c > 0);
+    if (first < 0) {
+      best = Math.min(best, used);
+      return;
+    }
+    if (used + 1 >= best) return;
+    cnt[first] = cnt[first]! - 1;
+    // Each piece of a plan with best − 1 pieces can waste, on average, no more than this.
+    const maxWaste = (best - 1) * cap - total;
+    const choose = (i: number, room: number): void => {
+      if (gaveUp || best <= lower) return;
+      if (++nodes > maxNodes) {
+        gaveUp = true;
+        return;
+      }
+      if (i === len.length) {
+        // Only maximal fills: a cut still left that fits the offcut would have gone in.
+        for (let g = 0; g < len.length; g++) if (cnt[g]! - take[g]! > 0 && len[g]! <= room + EPS) return;
+        if (waste + room > maxWaste + EPS && cnt.some((c, g) => c - take[g]! > 0)) return;
+        // The deeper pieces reuse `take`, so this piece's counts are kept aside.
+        const mine = take.slice();
+        for (let g = 0; g < len.length; g++) cnt[g] = cnt[g]! - mine[g]!;
+        take.fill(0);
+        fill(used + 1, waste + room);
+        for (let g = 0; g < len.length; g++) cnt[g] = cnt[g]! + mine[g]!;
+        mine.forEach((t, g) => (take[g] = t));
+        return;
+      }
+      const most = Math.min(cnt[i]!, Math.floor(room / len[i]! + EPS));
+      for (let t = most; t >= 0; t--) {
+        take[i] = t;
+        choose(i + 1, room - t * len[i]!);
+      }
+      take[i] = 0;
+    };
+    choose(first, cap - len[first]!);
+    cnt[first] = cnt[first]! + 1;
+  };
+  fill(0, 0);
+  return best < upper ? best : null;
 }
 
 /** Best single pattern for the sequential heuristic: the subset of remaining cuts that fills one stock most. */
@@ -210,5 +287,9 @@ export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0)
     // No layout beat first fit and the search finished: first fit's count is the minimum.
     return { count: exact ? exact.length : ffd, exact: !status.gaveUp };
   }
-  return { count: Math.min(ffd, sequentialPatterns(sizes, cap)), exact: false };
+  const heuristic = Math.min(ffd, sequentialPatterns(sizes, cap));
+  // Beyond the exact search a count is an estimate, even where it meets the lower bound: called exact
+  // only sometimes, it would lose its waste factor as a wall grew into such a case.
+  if (heuristic <= lowerBound(sizes, cap)) return { count: heuristic, exact: false };
+  return { count: fewestByFilling(sizes, cap, heuristic, LONG_LIST_NODES) ?? heuristic, exact: false };
 }
