@@ -222,24 +222,6 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
 }
 
 /**
- * Where an upright at `x` goes: where it lands on a door or window, it moves to the nearer side of the
- * opening (where it also trims the opening's edge), if that spot is on the wall and clear. Left where
- * it fell, its length would depend on how the even spacing happens to meet the openings, and a longer
- * wall could need less.
- */
-function uprightBesideOpenings(ctx: WallContext, x: number, w: number, bottom: number, top: number): number {
-  const inBand = ctx.openings.filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01);
-  const clear = (at: number): boolean =>
-    at >= -1e-9 && at + w <= ctx.length + 1e-9 && inBand.every((o) => overlap(o.offset, o.offset + o.width, at, at + w) <= 0.01);
-  const hit = inBand.find((o) => overlap(o.offset, o.offset + o.width, x, x + w) > 0.01);
-  if (!hit) return x;
-  const left = hit.offset - w;
-  const right = hit.offset + hit.width;
-  const sides = Math.abs(x - left) <= Math.abs(x - right) ? [left, right] : [right, left];
-  return sides.find(clear) ?? x;
-}
-
-/**
  * Edges of an upright that need their own bead: an edge on a wall end is the corner's (or the end's)
  * joint, and an edge against a door or window side is the opening's, both counted once elsewhere.
  */
@@ -256,18 +238,30 @@ function uprightEdgesToCaulk(ctx: WallContext, x: number, w: number, y0: number,
 function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
   const w = board.width;
   if (top - bottom < MIN_PIECE) return;
-  const n = ctx.length <= 2 * w ? 1 : Math.ceil((ctx.length - w) / spacing - 1e-9) + 1;
-  const pitch = n > 1 ? (ctx.length - w) / (n - 1) : 0;
-  for (let i = 0; i < n; i++) {
-    const x = uprightBesideOpenings(ctx, i * pitch, w, bottom, top);
-    for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
-      let y = y0;
-      for (const len of splitFull(y1 - y0, board.length)) {
-        ctx.pieces.push({ role, x, y, width: w, height: len });
-        addCuts(ctx.reg.lengths, board.id, [len]);
-        ctx.trimFeet += len / 12;
-        ctx.caulkFeet += (uprightEdgesToCaulk(ctx, x, w, y, y + len) * len) / 12;
-        y += len;
+  // Each stretch of wall between the wall ends and the openings (casings included) that cross the
+  // band gets its own uprights: one against each end of the stretch (so one stands against every
+  // casing, none straddles it) and the rest spread evenly, no more than `spacing` apart on centre.
+  // Openings are placed from the left end, so a longer wall only lengthens the last stretch and only
+  // ever adds uprights; spread over the whole wall and moved off the openings they land on, uprights
+  // would stack on one another and their number would rise and fall with the wall's length.
+  const blocked = ctx.openings
+    .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01)
+    .map((o) => [o.offset, o.offset + o.width] as const);
+  for (const [a, b] of subtractIntervals([0, ctx.length], blocked, w - 1e-9)) {
+    const run = b - a;
+    const n = run <= 2 * w ? 1 : Math.ceil((run - w) / spacing - 1e-9) + 1;
+    const pitch = n > 1 ? (run - w) / (n - 1) : 0;
+    for (let i = 0; i < n; i++) {
+      const x = a + i * pitch;
+      for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
+        let y = y0;
+        for (const len of splitFull(y1 - y0, board.length)) {
+          ctx.pieces.push({ role, x, y, width: w, height: len });
+          addCuts(ctx.reg.lengths, board.id, [len]);
+          ctx.trimFeet += len / 12;
+          ctx.caulkFeet += (uprightEdgesToCaulk(ctx, x, w, y, y + len) * len) / 12;
+          y += len;
+        }
       }
     }
   }
