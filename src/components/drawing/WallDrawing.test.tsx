@@ -61,4 +61,23 @@ describe('WallDrawing fixtures', () => {
     expect(html).toMatch(/<g data-kind="radiator" data-placement="behind"><rect x="10" y="72" width="36" height="24"/); // 96 − 24 = 72
     expect(html).toContain('>radiator</text>');
   });
+
+  it('draws the nosing line on a stair wall and the band bottom following it', () => {
+    // 12 treads of 10-1/2 in, risers 7-1/2 in: the nosing line runs 126 in and climbs 90 in (docs/sources.md §40).
+    const base = e.takeoff.rooms[1]!.walls[0]!;
+    const wall = {
+      ...base,
+      ceilingHeight: 200,
+      rake: [
+        { x: 0, y: 0 },
+        { x: 126, y: 90 },
+      ] as [{ x: number; y: number }, { x: number; y: number }],
+    };
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" />);
+    // SVG y is measured down from the ceiling (200 in): the floor at 200, the top of the stair at 200 − 90 = 110.
+    expect(html).toContain('data-role="nosing-line" points="0,200 126,110 150,110"');
+    const lift = base.bandBottom;
+    expect(html).toContain(`data-role="band-bottom" points="0,${200 - lift} 126,${110 - lift} 150,${110 - lift}"`);
+    expect(renderToStaticMarkup(<WallDrawing wall={base} units="imperial" />)).not.toContain('nosing-line');
+  });
 });

@@ -213,6 +213,9 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
         ))}
       </g>
 
+      {/* On a stair wall: the nosing line, and the band's bottom edge following it, level past the stair. */}
+      {wall.rake && <RakeLines rake={wall.rake} length={L} bandBottom={wall.bandBottom} y={y} />}
+
       {/* Dimensions: length below, ceiling height on the left, covered band on the right. */}
       {hDim(0, L, H + font * 1.2, len(L), 'length')}
       {vDim(0, H, -font * 1.2, len(H), 'ceiling', 'end')}
@@ -223,6 +226,37 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
         </text>
       )}
     </svg>
+  );
+}
+
+/** The nosing line from its low end to its high end, level to the wall end beyond; the band's bottom `bandBottom` above it. */
+function RakeLines({
+  rake,
+  length,
+  bandBottom,
+  y,
+}: {
+  rake: NonNullable<WallTakeoff['rake']>;
+  length: number;
+  bandBottom: number;
+  y: (fromFloor: number) => number;
+}) {
+  const [low, high] = rake;
+  const end = high.x >= low.x ? length : 0;
+  const line = (lift: number): string => [low, high, { x: end, y: high.y }].map((p) => `${r(p.x)},${y(p.y + lift)}`).join(' ');
+  return (
+    <g className="rake">
+      <polyline data-role="nosing-line" points={line(0)} fill="none" stroke={INK} strokeWidth={1.25} vectorEffect="non-scaling-stroke" />
+      <polyline
+        data-role="band-bottom"
+        points={line(bandBottom)}
+        fill="none"
+        stroke={SLATE}
+        strokeWidth={1}
+        strokeDasharray="4 3"
+        vectorEffect="non-scaling-stroke"
+      />
+    </g>
   );
 }
 

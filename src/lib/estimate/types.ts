@@ -87,6 +87,8 @@ export interface WallTakeoff {
   returns: number;
   boards?: BoardLayout;
   frames?: { count: number; width: number; height: number };
+  /** On a stair wall: the nosing line's low and high ends, in wall inches (stair-wall.ts, docs/sources.md §40). */
+  rake?: [{ x: number; y: number }, { x: number; y: number }];
   pieces: WallPiece[];
   capRailFeet: number;
   baseboardFeet: number;

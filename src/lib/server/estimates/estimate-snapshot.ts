@@ -78,6 +78,7 @@ const wallTakeoff = z.object({
   returns: num,
   boards: boardLayout.optional(),
   frames: z.object({ count: num, width: num, height: num }).optional(),
+  rake: z.tuple([z.object({ x: num, y: num }), z.object({ x: num, y: num })]).optional(),
   pieces: z.array(wallPiece),
   capRailFeet: num,
   baseboardFeet: num,
