@@ -31,6 +31,7 @@ describe('brads in the size each fixing needs', () => {
     // → 87 brads, 1/4 + 3/4 = 1 in long. Battens: ceil((144 − 2.5) / 16) + 1 = 10, each 40 − 3.5 (1x4
     // top rail) − 5.25 = 31.25 in: 312.5 in = 26.04 ft, plus the 12 ft top rail = 38.04 ft × 1.5 = 57.1
     // → 58 brads, 3/4 + 1-1/4 = 2 in. Cap rail 12 ft × 1.5 = 18, 1-1/8 + 1-1/4 = 2-3/8 in: the 2-1/2 in nail.
+    // The old baseboard is reset on the new work (12 ft × 1.5 = 18 more 2 in brads, build-up.ts).
     const t = takeoff(job, parseRateBook(sampleRateBook()).catalogue);
     const brads = t.materials.filter((m) => m.id.startsWith('brads'));
     expect(brads.map((m) => [m.id, m.quantity])).toEqual([
@@ -44,14 +45,15 @@ describe('brads in the size each fixing needs', () => {
   });
 
   it('without a list, the single brad prices everything as before', () => {
-    // Computed here: 86.875 + 38.04 × 1.5 + 12 × 1.5 = 161.9 brads → 162, one box of 1000.
+    // Computed here: 86.875 + 38.04 × 1.5 + 12 × 1.5 (cap rail) + 12 × 1.5 (the old baseboard reset on the
+    // 1 in of new work, build-up.ts) = 179.9 brads → 180, one box of 1000.
     const rb = sampleRateBook();
     delete (rb.catalogue.supplies.brads as { sizes?: unknown }).sizes;
     const t = takeoff(job, parseRateBook(rb).catalogue);
     const brads = t.materials.filter((m) => m.id.startsWith('brads'));
     expect(brads).toHaveLength(1);
     expect(brads[0]).toMatchObject({ id: 'brads', quantity: 1, unitCents: 900 });
-    expect(brads[0]!.basis).toMatch(/= 162 brads, 1000 per box/);
+    expect(brads[0]!.basis).toMatch(/= 180 brads, 1000 per box/);
   });
 
   it('a fixing no listed brad is long enough for takes the single brad', () => {

@@ -41,3 +41,13 @@ export function backBandRuns(o: PlacedOpening): number[] {
   if (c <= 0) return [];
   return [o.height + c, o.height + c, o.width + 2 * c];
 }
+
+/**
+ * Whether the new work stands proud of the existing baseboard's face (less CASING_REVEAL): then the
+ * baseboard comes off, the work goes down to the floor line, and the baseboard is reset on its face
+ * (common practice, no source; docs/sources.md §31). Picture frames stand clear of the baseboard.
+ */
+export function baseboardNeedsReset(t: Treatment, c: Catalogue): boolean {
+  if (t.kind === 'picture-frame') return false;
+  return newFaceThickness(t, c) > c.existingBaseboardThickness - CASING_REVEAL + 1e-9;
+}

@@ -387,6 +387,11 @@ export const catalogueSchema = z.strictObject({
    * opening, its thickness is the face the new work must stay behind. Default 2-1/4 × 11/16 in:
    * from memory, docs/sources.md §30.
    */
+  /**
+   * Thickness of the baseboard already on the walls: where the new work would stand proud of it, the
+   * baseboard is taken off and reset on the new face (build-up.ts). Default 1/2 in: from memory.
+   */
+  existingBaseboardThickness: inches('Existing baseboard thickness', 0, 2).default(0.5),
   casing: z.strictObject({ width: inches('Casing width', 0, 12), thickness: inches('Casing thickness', 0, 2) }).default({ width: 2.25, thickness: 0.6875 }),
   /** Mouldings set in each inside and outside corner, the band's height; none when left out. */
   insideCornerTrimId: stockId('Inside corner trim').optional(),

@@ -4,7 +4,7 @@
  */
 import { balancedPositions, balancedRun } from './balanced-run.ts';
 import { boardPositions, boardRun } from './board-run.ts';
-import { backBandRuns, CASING_REVEAL, newFaceThickness, proudOfCasing } from './build-up.ts';
+import { baseboardNeedsReset, backBandRuns, CASING_REVEAL, newFaceThickness, proudOfCasing } from './build-up.ts';
 import { blockedAreaSqIn, casingBlock } from './casings.ts';
 import { cautionsFor } from './cautions.ts';
 import { defaultInsideCorners } from './corners.ts';
@@ -445,7 +445,7 @@ function wallTakeoff(
       const rail = boardById(catalogue, t.railId);
       // The bottom rail's bottom edge is the new baseboard's top joint when that is counted; the top
       // rail's top edge is the cap rail's bottom edge (or the ceiling joint).
-      layRail(ctx, rail, bandBottom, room.replaceBaseboard ? 1 : 2);
+      layRail(ctx, rail, bandBottom, room.replaceBaseboard || baseboardNeedsReset(t, catalogue) ? 1 : 2);
       layRail(ctx, rail, bandTop - rail.width, 1);
       layUprights(ctx, boardById(catalogue, t.stileId), t.stileSpacing, bandBottom + rail.width, bandTop - rail.width, 'stile');
       break;
@@ -551,8 +551,13 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   const netSqFt = sum((w) => w.netSqFt);
   const capRailFeet = sum((w) => w.capRailFeet);
   const baseboardFeet = sum((w) => w.baseboardFeet);
-  const baseboardRemovedFeet = room.replaceBaseboard ? baseboardFeet : 0;
-  trimFeet += capRailFeet + (room.replaceBaseboard ? baseboardFeet : 0);
+  // Old baseboard comes off when it is replaced, or when the new work would stand proud of it and it is
+  // reset on the new face (removed and installed again, no new stock).
+  const baseboardReset = !room.replaceBaseboard && baseboardFeet > 0 && baseboardNeedsReset(t, catalogue);
+  const baseboardRemovedFeet = room.replaceBaseboard || baseboardReset ? baseboardFeet : 0;
+  if (baseboardReset) caulkFeet += baseboardFeet;
+  // A new or reset baseboard is nailed on: its run counts as trim (brads).
+  trimFeet += capRailFeet + baseboardRemovedFeet;
   const n = walls.length;
   const insideCorners = room.insideCorners ?? defaultInsideCorners(room.walls);
   const outsideCorners = room.outsideCorners ?? 0;
@@ -593,6 +598,7 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     capRailFeet,
     baseboardFeet,
     baseboardRemovedFeet,
+    ...(baseboardReset ? { baseboardReset: true } : {}),
     ...(backBandFeet > 0 ? { backBandFeet } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
     // The old baseboard is taken to be as tall as the new one.
@@ -619,6 +625,10 @@ export function takeoffOf(project: Project, catalogue: Catalogue, units: Units):
     notes.push(
       `Doors and windows without measurements are drawn at common sizes: doors ${len(DEFAULT_DOOR.width)} × ${len(DEFAULT_DOOR.height)}, windows ${len(DEFAULT_WINDOW.width)} × ${len(DEFAULT_WINDOW.height)} with the sill at ${len(DEFAULT_WINDOW.sillHeight)}, set from the left end of the wall ${len(OPENING_SPACING)} apart, or further where their casings need the room.`,
     );
+  }
+  const reset = rooms.filter((r) => r.baseboardReset).map((r) => r.name);
+  if (reset.length > 0) {
+    notes.push(`In ${reset.join(', ')}, the new work would stand proud of the existing baseboard, so the baseboard is taken off and reset on it.`);
   }
   for (const r of rooms) {
     if (r.dampAlternativeFor) {

@@ -117,6 +117,8 @@ export interface RoomTakeoff {
   capRailFeet: number;
   baseboardFeet: number;
   baseboardRemovedFeet: number;
+  /** The old baseboard is taken off and reset on the new work, which would stand proud of it. */
+  baseboardReset?: boolean;
   /** Back band added around casings the new work stands proud of (docs/sources.md §31). */
   backBandFeet?: number;
   /** Painted surface disturbed by the work (removed baseboard counts in full), for the lead-safe rule. */

@@ -105,6 +105,7 @@ const roomTakeoff = z.object({
   capRailFeet: num,
   baseboardFeet: num,
   baseboardRemovedFeet: num,
+  baseboardReset: z.boolean().optional(),
   backBandFeet: num.optional(),
   disturbedPaintSqFt: num,
   panelSqFt: num,
