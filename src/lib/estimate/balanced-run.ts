@@ -13,7 +13,7 @@
  * board ripped to the run. The owner's narrowest acceptable end (`minEndWidth`) is checked by the
  * takeoff, which says so when a board too narrow for it makes even balanced ends thinner.
  */
-import { boardPositions } from './board-run.ts';
+import { boardRun } from './board-run.ts';
 
 const EPS = 1e-9;
 
@@ -24,7 +24,7 @@ export interface BalancedRun {
 }
 
 export function balancedRun(runLength: number, boardWidth: number, gap: number): BalancedRun {
-  boardPositions(runLength, boardWidth, gap); // the same argument checks as a run from one end
+  boardRun(runLength, boardWidth, gap); // the same argument checks as a run from one end
   if (runLength <= boardWidth + EPS) return { count: 1, endWidth: runLength };
   const pitch = boardWidth + gap;
   const middle = Math.max(0, Math.ceil((runLength - gap - 2 * boardWidth) / pitch - EPS));
@@ -34,7 +34,12 @@ export function balancedRun(runLength: number, boardWidth: number, gap: number):
 
 /** Start positions and widths of every board in a balanced run, from the starting end. */
 export function balancedPositions(runLength: number, boardWidth: number, gap: number): Array<{ start: number; width: number }> {
-  const { count, endWidth } = balancedRun(runLength, boardWidth, gap);
+  return positionsOf(balancedRun(runLength, boardWidth, gap), boardWidth, gap);
+}
+
+/** The positions of a run `balancedRun` has already worked out. */
+export function positionsOf(run: BalancedRun, boardWidth: number, gap: number): Array<{ start: number; width: number }> {
+  const { count, endWidth } = run;
   if (count === 1) return [{ start: 0, width: endWidth }];
   const out: Array<{ start: number; width: number }> = [{ start: 0, width: endWidth }];
   let x = endWidth + gap;

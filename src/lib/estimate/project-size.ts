@@ -6,6 +6,7 @@
  */
 import { EstimateInputError } from './errors.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW } from './geometry.ts';
+import { treatmentForRoom } from './damp-stock.ts';
 import type { Catalogue, Project, Room, Treatment } from './schemas.ts';
 import { shortestJoinedPiece } from './staggered-joints.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
@@ -149,9 +150,8 @@ function wallPieces(room: Room, length: number, openings: Array<{ width: number;
 export function projectSize(project: Project, catalogue: Catalogue): ProjectSize {
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId);
   const rooms = project.rooms.map((room): RoomSize => {
-    const chosen = catalogue.treatments.find((x) => x.id === room.treatment.id);
-    // A damp room is laid out in the firm's damp-room alternative (damp-stock.ts), so bound that one.
-    const t = (room.damp && chosen?.dampRoomTreatmentId ? catalogue.treatments.find((x) => x.id === chosen.dampRoomTreatmentId) : undefined) ?? chosen;
+    // A damp room is laid out in the firm's damp-room alternative, so bound the treatment the takeoff uses.
+    const t = catalogue.treatments.some((x) => x.id === room.treatment.id) ? treatmentForRoom(room, catalogue).treatment : undefined;
     const size: RoomSize = { walls: room.walls.length, openings: 0, boxes: 0, coveredSqFt: 0, pieces: 0 };
     for (const wall of room.walls) {
       const length = wallLength(room, wall) ?? 0;

@@ -114,12 +114,22 @@ function exactBins(sizes: number[], cap: number, upper: number, status?: { gaveU
   };
   dfs(0);
   if (status) status.gaveUp = gaveUp;
-  if (gaveUp && bestAssign === null) return null;
   if (bestAssign === null) return null;
   const bins: number[][] = Array.from({ length: best }, () => []);
   const chosen: number[] = bestAssign;
   chosen.forEach((b, k) => bins[b]!.push(order[k]!));
   return bins;
+}
+
+/** The distinct sizes (to a millionth of an inch), longest first, with how many of each. */
+function distinctLengths(sizes: number[]): { lengths: number[]; counts: number[] } {
+  const groups = new Map<number, number>();
+  for (const s of sizes) {
+    const key = Math.round(s * 1e6) / 1e6;
+    groups.set(key, (groups.get(key) ?? 0) + 1);
+  }
+  const lengths = [...groups.keys()].sort((a, b) => b - a);
+  return { lengths, counts: lengths.map((l) => groups.get(l)!) };
 }
 
 /**
@@ -129,13 +139,7 @@ function exactBins(sizes: number[], cap: number, upper: number, status?: { gaveU
  * the search stops once the offcuts so far exceed what a plan one piece shorter than the best can waste.
  */
 function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: number): number | null {
-  const groups = new Map<number, number>();
-  for (const s of sizes) {
-    const key = Math.round(s * 1e6) / 1e6;
-    groups.set(key, (groups.get(key) ?? 0) + 1);
-  }
-  const len = [...groups.keys()].sort((a, b) => b - a);
-  const cnt = len.map((l) => groups.get(l)!);
+  const { lengths: len, counts: cnt } = distinctLengths(sizes);
   // The search recurses once per distinct length per stock piece: keep it well inside the call stack.
   if (upper * (len.length + 2) > MAX_FILL_DEPTH) return null;
   const total = sizes.reduce((s, x) => s + x, 0);
@@ -221,13 +225,7 @@ function bestPattern(lengths: number[], remaining: number[], cap: number, budget
 
 /** Stock lengths the sequential heuristic uses; Infinity when it ran out of its node budget. */
 function sequentialPatterns(sizes: number[], cap: number): number {
-  const groups = new Map<number, number>();
-  for (const s of sizes) {
-    const key = Math.round(s * 1e6) / 1e6;
-    groups.set(key, (groups.get(key) ?? 0) + 1);
-  }
-  const lengths = [...groups.keys()].sort((a, b) => b - a);
-  const remaining = lengths.map((l) => groups.get(l)!);
+  const { lengths, counts: remaining } = distinctLengths(sizes);
   const budget = { nodes: SEQUENTIAL_NODES };
   let left = sizes.length;
   let used = 0;

@@ -2,7 +2,7 @@
  * The takeoff: per wall and per room, the covered band, areas, openings, boxes, board layout, the
  * pieces of material on the wall and the cuts they need; then the project's materials and cautions.
  */
-import { balancedPositions, balancedRun } from './balanced-run.ts';
+import { balancedRun, positionsOf } from './balanced-run.ts';
 import { boardPositions, boardRun } from './board-run.ts';
 import { baseboardNeedsReset, backBandRuns, CASING_REVEAL, newFaceThickness, proudOfCasing } from './build-up.ts';
 import { blockedAreaSqIn, casingBlock } from './casings.ts';
@@ -151,7 +151,7 @@ interface RunPlan {
 function runPlan(t: Treatment, runLength: number, width: number, gap: number): RunPlan {
   if (t.layout === 'balanced') {
     const run = balancedRun(runLength, width, gap);
-    const positions = balancedPositions(runLength, width, gap).map((p) => ({ ...p, ripped: p.width < width - 1e-6 }));
+    const positions = positionsOf(run, width, gap).map((p) => ({ ...p, ripped: p.width < width - 1e-6 }));
     return { layout: { count: run.count, lastWidth: run.endWidth, leftover: 0, firstWidth: run.endWidth }, positions };
   }
   const run = boardRun(runLength, width, gap);
