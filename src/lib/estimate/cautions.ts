@@ -15,7 +15,8 @@ function namesOf(rooms: RoomTakeoff[]): string[] {
  * any wood finish over an electrical box → box extender and power off (NEC 314.20, §4);
  * built before 1978 or not sure → lead-safe practices (EPA RRP rule, §5);
  * damp room → moisture-resistant materials, sealed faces, no wood in the tub or shower surround (IRC R307.2, §10);
- * full-height work → ladder safety (common practice).
+ * full-height work → ladder safety (common practice);
+ * a stair wall → a stair platform or stair-rated ladder, never a ladder on the treads (common practice, §43).
  */
 export function cautionsFor(project: Project, rooms: RoomTakeoff[], catalogue: Catalogue): Caution[] {
   const out: Caution[] = [];
@@ -116,6 +117,20 @@ export function cautionsFor(project: Project, rooms: RoomTakeoff[], catalogue: C
     });
   }
 
+  // Work over a stair (docs/sources.md §43; common practice, no source).
+  const stairs = rooms.filter((r) => r.walls.some((w) => w.rake !== undefined));
+  if (stairs.length > 0) {
+    out.push({
+      id: 'stair',
+      title: 'Working over a stair',
+      text:
+        'A stair wall is worked from a stair platform, or from a ladder made and rated for use on stairs, set up as its maker says. ' +
+        'A ladder never stands on the treads with its feet at different heights, and is never propped on boxes or books to level it. ' +
+        'The stair stays closed to the household while we work, and the treads are kept clear of offcuts and tools. ' +
+        'Workplace safety rules and your local codes apply; a stair that is loose or out of the code limits is a matter for a licensed professional before it is trimmed.',
+      rooms: namesOf(stairs),
+    });
+  }
   out.push(...fixtureCautions(rooms));
   out.push({
     id: 'tools',

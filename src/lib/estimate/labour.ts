@@ -1,6 +1,7 @@
 /** Labour hours by task: productivity per treatment and time per item, from the rate book. */
 import type { RateBook } from './schemas.ts';
 import { fixtureLabour } from './fixture-labour.ts';
+import { stairLabour } from './stair-labour.ts';
 import { paintingLabour } from './painting.ts';
 import { describeVisits, setupHoursPerVisit, siteVisits } from './site-visits.ts';
 import type { LabourLine, SiteVisits, Takeoff } from './types.ts';
@@ -83,6 +84,7 @@ export function labourAndVisits(takeoff: Takeoff, rateBook: RateBook): { lines: 
     sum((r) => r.backBandFeet ?? 0),
     L.hoursPerFootBackBand,
   );
+  lines.push(...stairLabour(takeoff, L));
   lines.push(...fixtureLabour(takeoff, L.hoursPerFixture));
   // Install days count every hour so far (install, trim, cut-outs); painting comes on its own visits.
   const installHours = lines.reduce((a, l) => a + l.hours, 0);

@@ -35,6 +35,7 @@ export function sampleRateBook(): RateBookInput {
         { id: 'shiplap-1x6-8', name: '1x6 milled shiplap, 8 ft', nominal: '1x6', faceWidth: 5.125, length: 96, priceCents: 1400 },
         { id: 'mdf-1x3-8', name: '1x3 primed MDF batten, 8 ft', nominal: '1x3', length: 96, priceCents: 650 },
         { id: 'mdf-1x4-8', name: '1x4 primed MDF board, 8 ft', nominal: '1x4', length: 96, priceCents: 850 },
+        { id: 'pine-1x6-16', name: '1x6 pine skirt board, 16 ft', nominal: '1x6', length: 192, priceCents: 2600 }, // demo price
       ],
       mouldings: [
         { id: 'base-5', name: '5-1/4 in primed baseboard, 16 ft', width: 5.25, thickness: 0.5625, length: 192, priceCents: 2600 },
@@ -46,6 +47,7 @@ export function sampleRateBook(): RateBookInput {
       ],
       baseboardId: 'base-5',
       capRailId: 'cap-rail',
+      skirtBoardId: 'pine-1x6-16',
       casing: { width: 2.25, thickness: 0.6875 }, // demo values, the common stock casing (docs/sources.md §30)
       backBandId: 'back-band',
       insideCornerTrimId: 'corner-in',
@@ -194,6 +196,7 @@ export function sampleRateBook(): RateBookInput {
       hoursPerFootBaseboardInstalled: 0.05,
       hoursPerFootCapRail: 0.06,
       hoursPerFootBackBand: 0.05, // demo value
+      hoursPerRakeCut: 0.1, // demo value
       paintSqFtPerHour: 80,
       setupHoursPerVisit: 1,
       hoursPerDay: 8,

@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { DRESSED_SIZES, NOMINAL_SIZES, type NominalSize } from './lumber.ts';
+import { stairSchema } from './stair-wall.ts';
 
 // ---------------------------------------------------------------------------------------------
 // Building blocks with messages that name the field.
@@ -86,6 +87,8 @@ export const wallSchema = z.strictObject({
   outlets: count('Number of outlets', 40).default(0),
   switches: count('Number of switches', 40).default(0),
   fixtures: z.array(fixtureSchema, { error: 'Fixtures must be a list.' }).max(8, { error: 'At most 8 fixtures per wall.' }).default([]),
+  /** A stair runs along this wall: the band follows its nosing line (stair-wall.ts). Left out: a level wall. */
+  stair: stairSchema.optional(),
 });
 
 export const roomTreatmentSchema = z.strictObject({
@@ -380,6 +383,11 @@ export const catalogueSchema = z.strictObject({
   mouldings: z.array(mouldingStockSchema).max(50),
   baseboardId: stockId('Baseboard'),
   capRailId: stockId('Cap rail'),
+  /**
+   * The board or moulding run along the rake on a stair wall (a skirt board); the baseboard stands in
+   * when left out (docs/sources.md §43).
+   */
+  skirtBoardId: stockId('Skirt board').optional(),
   /** A moulding run around a casing's outside edge where the new work stands proud of it (docs/sources.md §31). */
   backBandId: stockId('Back band').optional(),
   /**
@@ -420,6 +428,8 @@ export const rateBookSchema = z
       hoursPerFootBaseboardInstalled: num('Time per foot of baseboard installed', 'hours', 0, 2),
       hoursPerFootCapRail: num('Time per foot of cap rail', 'hours', 0, 2),
       hoursPerFootBackBand: num('Time per foot of back band', 'hours', 0, 2).default(0),
+      /** Marking, cutting and fitting one end cut to the stair's angle (docs/sources.md §43; common practice, no source). */
+      hoursPerRakeCut: num('Time per rake cut', 'hours', 0, 2).default(0.1),
       paintSqFtPerHour: num('Painting productivity', 'sq ft per hour', 1, 1000),
       /** Older rate books charged set-up per room; kept so they still parse, and used when the per-visit figure is missing. */
       setupHoursPerRoom: num('Set-up and clean-up per room', 'hours', 0, 24).optional(),
@@ -507,6 +517,8 @@ export const rateBookSchema = z
     need(mouldings, c.baseboardId, ['catalogue', 'baseboardId'], 'moulding');
     need(mouldings, c.capRailId, ['catalogue', 'capRailId'], 'moulding');
     need(mouldings, c.backBandId, ['catalogue', 'backBandId'], 'moulding');
+    if (c.skirtBoardId !== undefined && !boards.has(c.skirtBoardId) && !mouldings.has(c.skirtBoardId))
+      ctx.addIssue({ code: 'custom', path: ['catalogue', 'skirtBoardId'], message: `No board or moulding with id "${c.skirtBoardId}" in the catalogue.` });
     need(mouldings, c.insideCornerTrimId, ['catalogue', 'insideCornerTrimId'], 'moulding');
     need(mouldings, c.outsideCornerTrimId, ['catalogue', 'outsideCornerTrimId'], 'moulding');
     c.treatments.forEach((t, i) => {

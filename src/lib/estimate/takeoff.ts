@@ -19,6 +19,9 @@ import { formatLength, type Units } from './units.ts';
 import { checkProjectSize } from './project-size.ts';
 import { treatmentForRoom } from './damp-stock.ts';
 import { validateProject } from './validate.ts';
+import { skirtStock } from './stair-checks.ts';
+import { columnRakeCuts, developed, liftAt, rakedColumnTop, rakeOf, runRakeCuts, undeveloped, type Rake } from './stair-takeoff.ts';
+import { rakedBandArea, skirtLength, stairNotes } from './stair-wall.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
 export { bandTopFor, wallLength };
@@ -82,10 +85,16 @@ interface WallContext {
   caulkFeet: number;
   /** Scarf joints where a run is longer than any stock length. */
   joints: number;
+  /** On a stair wall: the stair, and the layout is in the frame measured up from its nosing line (stair-takeoff.ts). */
+  rake?: Rake;
+  /** Ends cut to the stair's angle. */
+  rakeCuts: number;
 }
 
 /** Vertical stretches of the band in the column [x0, x1] that no opening interrupts. */
 function columnIntervals(ctx: WallContext, x0: number, x1: number, bottom = ctx.bandBottom, top = ctx.bandTop): Interval[] {
+  // On a stair wall a column is cut at its long point (stair-takeoff.ts).
+  if (ctx.rake) top = rakedColumnTop(ctx.rake, x0, x1, top);
   const cuts = ctx.openings.filter((o) => overlap(o.offset, o.offset + o.width, x0, x1) > 0.01).map((o) => [o.sillHeight, o.sillHeight + o.height] as const);
   return subtractIntervals([bottom, top], cuts, MIN_PIECE);
 }
@@ -167,6 +176,7 @@ function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel', t: Treatm
     for (const sl of slices) {
       for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.ripped });
     }
+    if (ctx.rake && slices.length > 0) ctx.rakeCuts += columnRakeCuts(ctx.rake, col.start, col.start + col.width);
     // A panel notched around an opening still comes from one piece of the sheet.
     for (const [y0, y1] of columnCuts(slices)) {
       for (const len of splitFull(y1 - y0, longSide)) addSheetPiece(ctx.reg, sheet.id, col.width, len);
@@ -196,6 +206,7 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
       const slices = columnSlices(ctx, b.start, b.start + b.width);
       for (const sl of slices) for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped });
       for (const [y0, y1] of columnCuts(slices)) for (const len of splitFull(y1 - y0, maxLen)) cut(len);
+      if (ctx.rake && slices.length > 0) ctx.rakeCuts += columnRakeCuts(ctx.rake, b.start, b.start + b.width);
     });
     return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
   }
@@ -208,13 +219,9 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
     const y = ctx.bandBottom + b.start;
     const joints: number[] = [];
     for (const [x0, x1] of rowIntervals(ctx, y, y + b.width)) {
-      const row = staggeredRow({ x0, x1, stock: maxLen, studSpacing: ctx.catalogue.studSpacing, below });
+      const row = rowRun(ctx, x0, x1, maxLen, below, false);
       joints.push(...row.joints);
-      let x = x0;
-      for (const len of row.pieces) {
-        if (len >= MIN_PIECE) put(x, y, len, b.width, len, ripped);
-        x += len;
-      }
+      for (const p of row.pieces) if (p.len >= MIN_PIECE) put(p.x, y, p.width, b.width, p.len, ripped);
     }
     below = joints;
   });
@@ -253,6 +260,7 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
     const pitch = n > 1 ? (run - w) / (n - 1) : 0;
     for (let i = 0; i < n; i++) {
       const x = a + i * pitch;
+      if (ctx.rake) ctx.rakeCuts += columnRakeCuts(ctx.rake, x, x + w);
       for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
         let y = y0;
         for (const len of splitFull(y1 - y0, board.length)) {
@@ -272,21 +280,49 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
  * where one of its edges is another joint's already (a top rail under the cap rail or the ceiling).
  */
 function layRail(ctx: WallContext, board: BoardStock, y: number, edgesToCaulk: 1 | 2 = 2): void {
-  for (const [x0, x1] of rowIntervals(ctx, y, y + board.width)) {
-    let x = x0;
+  // On a stair wall a rail follows the rake, except a top rail under a level ceiling (in the nosing
+  // frame, the ceiling over the level part is the stair's climb lower).
+  const level = ctx.rake !== undefined && ctx.rake.full && y + board.width >= ctx.bandTop - 1e-6;
+  const yRow = level ? y - ctx.rake!.g.climb : y;
+  for (const [x0, x1] of rowIntervals(ctx, yRow, yRow + board.width)) {
     // A rail longer than the stock is joined on a stud (staggered-joints.ts).
-    for (const len of staggeredRow({ x0, x1, stock: board.length, studSpacing: ctx.catalogue.studSpacing }).pieces) {
-      if (len < MIN_PIECE) {
-        x += len;
-        continue;
-      }
-      ctx.pieces.push({ role: 'rail', x, y, width: len, height: board.width });
-      addCuts(ctx.reg.lengths, board.id, [len]);
-      ctx.trimFeet += len / 12;
-      ctx.caulkFeet += (edgesToCaulk * len) / 12;
-      x += len;
+    for (const p of rowRun(ctx, x0, x1, board.length, [], level).pieces) {
+      if (p.len < MIN_PIECE) continue;
+      ctx.pieces.push({ role: 'rail', x: p.x, y: yRow, width: p.width, height: board.width });
+      addCuts(ctx.reg.lengths, board.id, [p.len]);
+      ctx.trimFeet += p.len / 12;
+      ctx.caulkFeet += (edgesToCaulk * p.len) / 12;
     }
   }
+}
+
+/**
+ * The pieces of one run [x0, x1] across the wall, joined on studs clear of the joints `below`. On a
+ * stair wall a run that follows the rake is laid out along the nosing line, so its pieces have their
+ * true lengths (`len`) while `x` and `width` stay on the wall for drawings; its rake cuts are counted.
+ */
+function rowRun(
+  ctx: WallContext,
+  x0: number,
+  x1: number,
+  stock: number,
+  below: number[],
+  level: boolean,
+): { pieces: Array<{ x: number; width: number; len: number }>; joints: number[] } {
+  const r = level ? undefined : ctx.rake;
+  const u0 = r ? developed(r, x0) : x0;
+  const u1 = r ? developed(r, x1) : x1;
+  const row = staggeredRow({ x0: u0, x1: u1, stock, studSpacing: ctx.catalogue.studSpacing, below });
+  const pieces: Array<{ x: number; width: number; len: number }> = [];
+  let u = u0;
+  for (const len of row.pieces) {
+    const x = r ? undeveloped(r, u) : u;
+    const end = r ? undeveloped(r, u + len) : u + len;
+    pieces.push({ x, width: end - x, len });
+    u += len;
+  }
+  if (r) ctx.rakeCuts += runRakeCuts(r, x0, x1);
+  return { pieces, joints: row.joints };
 }
 
 function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-frame' }>, rows: number): WallTakeoff['frames'] {
@@ -374,16 +410,22 @@ function wallTakeoff(
   catalogue: Catalogue,
   reg: CutRegistry,
   units: Units,
-): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number } {
+): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number; rakeCuts: number; skirtFeet: number } {
   const length = wallLength(room, wall);
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
-  const bandBottom = baseboard.width;
-  const bandTop = bandTopFor(room);
   const wainscot = room.treatment.height === 'wainscot';
+  // A stair wall is laid out up from its nosing line (stair-takeoff.ts); the band starts on the skirt board.
+  const rake = wall.stair ? rakeOf(length, wall.stair, !wainscot) : undefined;
+  const skirt = rake ? skirtStock(catalogue) : undefined;
+  const bandBottom = skirt ? skirt.width : baseboard.width;
+  const bandTop = bandTopFor(room);
+  // Doors, windows, boxes and fixtures on the level part of a stair wall stand on the landing: in the
+  // nosing frame, a full-height band there ends the stair's climb below the ceiling.
+  const levelTop = rake?.full ? bandTop - rake.g.climb : bandTop;
   const openings: PlacedOpening[] = placeOpenings(wall.openings, length, catalogue.casing.width).map((o) => {
     const block = casingBlock({ ...o, inBand: false }, length);
-    return { ...o, inBand: overlap(block.sillHeight, block.sillHeight + block.height, bandBottom, bandTop) > 0 };
+    return { ...o, inBand: overlap(block.sillHeight, block.sillHeight + block.height, bandBottom, levelTop) > 0 };
   });
   // Layouts, areas, boxes, caulk and returns see each opening with its casing: the treatment stops at
   // the casing's outside edge, and an upright set beside an opening lands against the casing.
@@ -394,19 +436,21 @@ function wallTakeoff(
   // window, so no return or caulk at its edges is counted here; the scribing is its own labour).
   const fixtureBlocks: PlacedOpening[] = fixtures.flatMap((f) => {
     const b = blockedBy(f, room.ceilingHeight);
-    return b ? [{ kind: 'window' as const, ...b, inBand: overlap(b.sillHeight, b.sillHeight + b.height, bandBottom, bandTop) > 0, assumed: f.assumed }] : [];
+    return b ? [{ kind: 'window' as const, ...b, inBand: overlap(b.sillHeight, b.sillHeight + b.height, bandBottom, levelTop) > 0, assumed: f.assumed }] : [];
   });
   const covers = coversWall(t);
   const boxes = placeBoxes(wall, length, [...blocks, ...fixtureBlocks]).map((b) => ({
     ...b,
-    covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, bandTop) > 0,
+    covered: covers && overlap(b.bottom, b.bottom + b.height, bandBottom, rake ? rakedColumnTop(rake, b.offset, b.offset + b.width, bandTop) : bandTop) > 0,
     capRailCrosses: wainscot && overlap(b.bottom, b.bottom + b.height, bandTop, bandTop + capRail.width) > 0,
   }));
   const coveredHeight = bandTop - bandBottom;
-  const grossSqIn = length * coveredHeight;
+  // On a stair wall the band follows the nosing line (docs/sources.md §40): vertical height × length
+  // for a wainscot, less the triangle under the rake for full height.
+  const grossSqIn = rake ? rakedBandArea(length, rake.g, bandBottom, wainscot ? { wainscot: bandTop } : { ceiling: bandTop }) : length * coveredHeight;
   // Each stretch of wall comes off once, where casings and fixtures meet or overlap.
-  const openingsSqIn = blockedAreaSqIn(blocks, length, bandBottom, bandTop);
-  const fixturesSqIn = blockedAreaSqIn([...blocks, ...fixtureBlocks], length, bandBottom, bandTop) - openingsSqIn;
+  const openingsSqIn = blockedAreaSqIn(blocks, length, bandBottom, levelTop);
+  const fixturesSqIn = blockedAreaSqIn([...blocks, ...fixtureBlocks], length, bandBottom, levelTop) - openingsSqIn;
   const ctx: WallContext = {
     length,
     bandBottom,
@@ -418,6 +462,8 @@ function wallTakeoff(
     trimFeet: 0,
     caulkFeet: 0,
     joints: 0,
+    ...(rake ? { rake } : {}),
+    rakeCuts: 0,
   };
   const notes: string[] = [];
   const label = wall.label ?? `Wall ${index + 1}`;
@@ -460,26 +506,41 @@ function wallTakeoff(
   if (wainscot) {
     for (const [x0, x1] of rowIntervals(ctx, bandTop, bandTop + capRail.width)) {
       ctx.pieces.push({ role: 'cap-rail', x: x0, y: bandTop, width: x1 - x0, height: capRail.width });
-      addCuts(reg.lengths, capRail.id, trimCuts(x1 - x0, capRail.length, catalogue.trimEndAllowance));
-      capRailFeet += (x1 - x0) / 12;
+      // On a stair wall the cap rail follows the rake: its true length is along the nosing line.
+      const run = rake ? developed(rake, x1) - developed(rake, x0) : x1 - x0;
+      if (rake) ctx.rakeCuts += runRakeCuts(rake, x0, x1);
+      addCuts(reg.lengths, capRail.id, trimCuts(run, capRail.length, catalogue.trimEndAllowance));
+      capRailFeet += run / 12;
     }
     ctx.caulkFeet += 2 * capRailFeet;
   } else {
     ctx.caulkFeet += length / 12; // along the ceiling
   }
-  // Baseboard along the floor, broken by doors; new stock only when it is replaced.
+  // Baseboard along the floor, broken by doors; new stock only when it is replaced. On a stair wall it
+  // runs only on the level part; the skirt board takes its place along the rake.
   let baseboardFeet = 0;
-  for (const [x0, x1] of rowIntervals(ctx, 0, baseboard.width)) {
+  const floor: [number, number] = !rake ? [0, length] : rake.stair.startsAt === 'left' ? [rake.span[1], length] : [0, rake.span[0]];
+  for (const [x0, x1] of floor[1] - floor[0] < MIN_PIECE ? [] : rowIntervals(ctx, 0, baseboard.width, floor[0], floor[1])) {
     ctx.pieces.push({ role: 'baseboard', x: x0, y: 0, width: x1 - x0, height: baseboard.width });
     if (room.replaceBaseboard) addCuts(reg.lengths, baseboard.id, trimCuts(x1 - x0, baseboard.length, catalogue.trimEndAllowance));
     baseboardFeet += (x1 - x0) / 12;
   }
   if (room.replaceBaseboard) ctx.caulkFeet += baseboardFeet;
+  // The skirt board along the rake: bought by stock length, its two ends cut to the stair's angle, its top edge caulked.
+  let skirtFeet = 0;
+  if (rake && skirt) {
+    const run = skirtLength(rake.stair);
+    addCuts(reg.lengths, skirt.id, trimCuts(run, skirt.length, catalogue.trimEndAllowance));
+    skirtFeet = run / 12;
+    ctx.trimFeet += skirtFeet;
+    ctx.caulkFeet += skirtFeet;
+    ctx.rakeCuts += 2;
+  }
   // The edges of openings inside the band (the wall ends are counted per room, by its corners).
   for (const o of blocks) {
     if (!o.inBand) continue;
-    const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, bandTop);
-    const across = (o.sillHeight > bandBottom ? o.width : 0) + (o.sillHeight + o.height < bandTop ? o.width : 0);
+    const v = overlap(o.sillHeight, o.sillHeight + o.height, bandBottom, levelTop);
+    const across = (o.sillHeight > bandBottom ? o.width : 0) + (o.sillHeight + o.height < levelTop ? o.width : 0);
     ctx.caulkFeet += (2 * v + across) / 12;
   }
 
@@ -504,8 +565,11 @@ function wallTakeoff(
     );
   }
   const backBandFeet = backBandAtCasings(ctx, openings, t, label, units, notes);
+  if (rake) notes.push(...stairNotes(label, rake.stair, units));
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;
+  // Drawings measure up from the floor at the stair's foot: lift what was laid out in the nosing frame.
+  const lift = (x0: number, x1: number): number => (rake ? liftAt(rake, x0, x1) : 0);
   const out: WallTakeoff = {
     label,
     length,
@@ -516,21 +580,22 @@ function wallTakeoff(
     grossSqFt: grossSqIn / 144,
     openingsSqFt: openingsSqIn / 144,
     netSqFt: (grossSqIn - openingsSqIn - fixturesSqIn) / 144,
-    openings,
+    openings: rake ? openings.map((o) => ({ ...o, sillHeight: o.sillHeight + lift(o.offset, o.offset + o.width) })) : openings,
     ...(fixtures.length > 0 ? { fixtures, fixturesSqFt: fixturesSqIn / 144 } : {}),
-    boxes,
+    boxes: rake ? boxes.map((b) => ({ ...b, bottom: b.bottom + lift(b.offset, b.offset + b.width) })) : boxes,
     cutOuts: covered,
     // A return wherever the treatment stops at an opening: in the covered band, or where the cap rail
     // runs into the opening and is returned at its edge (common practice, no source).
     returns: blocks.filter((o) => o.inBand || (wainscot && overlap(o.sillHeight, o.sillHeight + o.height, bandTop, bandTop + capRail.width) > 0)).length,
     ...(boards ? { boards } : {}),
     ...(frames ? { frames } : {}),
-    pieces: ctx.pieces,
+    ...(rake ? { rake: rake.g.rake, rakeCuts: ctx.rakeCuts, skirtFeet } : {}),
+    pieces: rake ? ctx.pieces.map((p) => ({ ...p, y: p.y + lift(p.x, p.x + p.width) })) : ctx.pieces,
     capRailFeet,
     baseboardFeet,
     notes,
   };
-  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet };
+  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet, rakeCuts: ctx.rakeCuts, skirtFeet };
 }
 
 function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
@@ -540,11 +605,15 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   let trimFeet = 0;
   let caulkFeet = 0;
   let backBandFeet = 0;
+  let rakeCuts = 0;
+  let skirtFeet = 0;
   const walls = room.walls.map((w, i) => {
     const wt = wallTakeoff(room, w, i, t, catalogue, reg, units);
     trimFeet += wt.trimFeet;
     caulkFeet += wt.caulkFeet;
     backBandFeet += wt.backBandFeet;
+    rakeCuts += wt.rakeCuts;
+    skirtFeet += wt.skirtFeet;
     return wt.wall;
   });
   const sum = (f: (w: WallTakeoff) => number): number => walls.reduce((s, w) => s + f(w), 0);
@@ -600,6 +669,7 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     baseboardRemovedFeet,
     ...(baseboardReset ? { baseboardReset: true } : {}),
     ...(backBandFeet > 0 ? { backBandFeet } : {}),
+    ...(skirtFeet > 0 ? { skirtFeet, rakeCuts } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
     // The old baseboard is taken to be as tall as the new one.
     disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,

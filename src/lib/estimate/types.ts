@@ -89,6 +89,9 @@ export interface WallTakeoff {
   frames?: { count: number; width: number; height: number };
   /** On a stair wall: the nosing line's low and high ends, in wall inches (stair-wall.ts, docs/sources.md §40). */
   rake?: [{ x: number; y: number }, { x: number; y: number }];
+  /** On a stair wall: ends cut to the stair's angle, and the skirt board's length along the rake (feet). */
+  rakeCuts?: number;
+  skirtFeet?: number;
   pieces: WallPiece[];
   capRailFeet: number;
   baseboardFeet: number;
@@ -121,6 +124,9 @@ export interface RoomTakeoff {
   baseboardReset?: boolean;
   /** Back band added around casings the new work stands proud of (docs/sources.md §31). */
   backBandFeet?: number;
+  /** Stair walls: skirt board along the rake (feet) and ends cut to the stair's angle (stair-takeoff.ts). */
+  skirtFeet?: number;
+  rakeCuts?: number;
   /** Painted surface disturbed by the work (removed baseboard counts in full), for the lead-safe rule. */
   disturbedPaintSqFt: number;
   /** Area of boards or sheets glued and nailed to the wall (drives adhesive, brads and filler). */
@@ -152,7 +158,7 @@ export interface MaterialLine {
 }
 
 export interface Caution {
-  id: 'electrical-boxes' | 'cap-rail-box' | 'lead-safe' | 'damp-room' | 'wet-zone' | 'ladder' | 'tools' | 'fixture-trades';
+  id: 'electrical-boxes' | 'cap-rail-box' | 'lead-safe' | 'damp-room' | 'wet-zone' | 'ladder' | 'tools' | 'fixture-trades' | 'stair';
   title: string;
   text: string;
   rooms: string[];
@@ -188,6 +194,8 @@ export interface LabourLine {
     | 'baseboard'
     | 'cap-rail'
     | 'back-band'
+    | 'skirt-board'
+    | 'rake-cuts'
     | 'paint'
     | 'setup'
     | 'fixture-reset'

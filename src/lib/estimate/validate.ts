@@ -3,6 +3,7 @@ import { EstimateInputError, fieldsFromZod } from './errors.ts';
 import { fixtureProblems } from './fixtures.ts';
 import { DEFAULT_DOOR, DEFAULT_WINDOW, OPENING_SPACING, tryPlaceOpenings } from './geometry.ts';
 import { projectSchema, rateBookSchema, type Catalogue, type Project, type RateBook } from './schemas.ts';
+import { stairWallProblems } from './stair-checks.ts';
 import { formatLength, type Units } from './units.ts';
 
 const fmt = (x: number): string => `${Math.round(x * 100) / 100} in`;
@@ -98,6 +99,14 @@ export function checkProject(project: Project, catalogue: Catalogue, tripZones?:
         );
       } else {
         for (const [path, message] of Object.entries(fixtureProblems(wall.fixtures, length, placement.openings, wp, len))) bad(path, message);
+        if (wall.stair && Object.keys(fields).length === errorsBefore) {
+          const wallName = `${room.name}, ${wall.label ?? `wall ${w + 1}`}`;
+          const stairWall = { ...wall, stair: wall.stair };
+          for (const [path, message] of Object.entries(
+            stairWallProblems({ room, wall: stairWall, wallName, wp, length, treatment, catalogue, openings: placement.openings, units }),
+          ))
+            bad(path, message);
+        }
       }
     });
   });

@@ -79,6 +79,8 @@ const wallTakeoff = z.object({
   boards: boardLayout.optional(),
   frames: z.object({ count: num, width: num, height: num }).optional(),
   rake: z.tuple([z.object({ x: num, y: num }), z.object({ x: num, y: num })]).optional(),
+  rakeCuts: num.optional(),
+  skirtFeet: num.optional(),
   pieces: z.array(wallPiece),
   capRailFeet: num,
   baseboardFeet: num,
@@ -107,6 +109,8 @@ const roomTakeoff = z.object({
   baseboardRemovedFeet: num,
   baseboardReset: z.boolean().optional(),
   backBandFeet: num.optional(),
+  skirtFeet: num.optional(),
+  rakeCuts: num.optional(),
   disturbedPaintSqFt: num,
   panelSqFt: num,
   trimFeet: num,
@@ -129,7 +133,7 @@ const materialLine = z.object({
 });
 
 const caution = z.object({
-  id: z.enum(['electrical-boxes', 'cap-rail-box', 'lead-safe', 'damp-room', 'wet-zone', 'ladder', 'tools', 'fixture-trades']),
+  id: z.enum(['electrical-boxes', 'cap-rail-box', 'lead-safe', 'damp-room', 'wet-zone', 'ladder', 'tools', 'fixture-trades', 'stair']),
   title: str,
   text: str,
   rooms: z.array(str),
@@ -164,6 +168,8 @@ const labourLine = z.object({
     'baseboard',
     'cap-rail',
     'back-band',
+    'skirt-board',
+    'rake-cuts',
     'paint',
     'setup',
     'fixture-reset',

@@ -1,0 +1,155 @@
+import { describe, expect, it } from 'vitest';
+import { estimate, parseRateBook, sampleRateBook, takeoff, validateProject, type ProjectInput } from './index.ts';
+import { fieldsOf } from './input-refusal.testing.ts';
+
+const rateBook = parseRateBook(sampleRateBook());
+const catalogue = rateBook.catalogue;
+
+// The stair on these walls: 13 risers of 7-1/2 in to the landing, so 12 treads of 10 in whose nosings
+// run along the wall from its left end. Source: docs/sources.md §40 — run 12 × 10 = 120 in, climb
+// 12 × 7.5 = 90 in, rake atan(7.5 / 10) ≈ 36.87°, tan θ = 0.75, along the rake √(7.5² + 10²) = 12.5 in per step.
+const stair = { steps: 12, rise: 7.5, run: 10 };
+
+function stairHall(treatment: string, height: 'wainscot' | 'full', wall: Record<string, unknown> = {}, room: Record<string, unknown> = {}): ProjectInput {
+  return {
+    rooms: [
+      {
+        name: 'Stair hall',
+        // From the floor at the stair's foot to the ceiling over the landing (an invented stairwell).
+        ceilingHeight: 204,
+        walls: [{ label: 'Stair wall', length: 168, stair, ...wall }],
+        treatment: { id: treatment, height, ...(height === 'wainscot' ? { wainscotHeight: 36 } : {}) },
+        ...room,
+      },
+    ],
+    builtBefore1978: 'no',
+    measuredBy: 'site-measure',
+  } as ProjectInput;
+}
+
+describe('a stair wall in board and batten, wainscot 36 in above the nosing (hand-worked)', () => {
+  // The 14 ft (168 in) wall; a 1x6 skirt board (5-1/2 in dressed, docs/sources.md §42, DOC PS 20) on the
+  // stair, so the band runs from 5-1/2 in to 36 in above the nosing line: 30-1/2 in tall everywhere.
+  const e = estimate(stairHall('board-and-batten', 'wainscot'), rateBook);
+  const wall = e.takeoff.rooms[0]!.walls[0]!;
+  const heights = (role: string): number[] => wall.pieces.filter((p) => p.role === role).map((p) => Math.round(p.height * 1000) / 1000);
+
+  it('covers the band that follows the nosing line', () => {
+    // Source: docs/sources.md §40 — a band of constant vertical height is a parallelogram: 30.5 × 168 = 5124 sq in ≈ 35.58 sq ft.
+    expect(wall.grossSqFt).toBeCloseTo(5124 / 144, 6);
+    expect(wall.netSqFt).toBeCloseTo(5124 / 144, 6);
+    expect(wall.rake).toEqual([
+      { x: 0, y: 0 },
+      { x: 120, y: 90 },
+    ]);
+  });
+
+  it('cuts backing sheets and battens at their long point', () => {
+    // Backing columns of the 48 in sheet from the left: 0–48 and 48–96 climb 48 × 0.75 = 36 in → 30.5 + 36 = 66.5 in;
+    // 96–144 climbs from 72 to the top of the stair at 90 → 30.5 + 18 = 48.5 in; 144–168 is level → 30.5 in.
+    expect(heights('panel')).toEqual([66.5, 66.5, 48.5, 30.5]);
+    // Battens (1x3, 2-1/2 in) under the 1x4 top rail (3-1/2 in): 36 − 3.5 − 5.5 = 27 in square. Twelve spread
+    // over 168 in (ceil(165.5 / 16) + 1 = 12, 15.045 in apart); the first eight (x ≤ 105.3) sit on the rake and
+    // take 2.5 × 0.75 = 1.875 in more: 28.875 in; the last four (x ≥ 120.4) are on the level part: 27 in.
+    expect(heights('batten')).toEqual([...Array(8).fill(28.875), ...Array(4).fill(27)]);
+  });
+
+  it('runs the top rail and the cap rail along the rake at their true length', () => {
+    // Along the nosing line: 120 × 12.5 / 10 = 150 in over the stair + 48 in level = 198 in = 16.5 ft.
+    expect(wall.capRailFeet).toBeCloseTo(16.5, 9);
+    const rail = wall.pieces.filter((p) => p.role === 'rail');
+    const railCut = e.takeoff.materials.find((m) => m.id === 'board:mdf-1x4-8');
+    expect(rail.reduce((s, p) => s + p.width, 0)).toBeCloseTo(168, 6);
+    expect(railCut).toBeDefined();
+  });
+
+  it('counts the skirt board and the rake cuts, and prices them', () => {
+    // Skirt: 12 × 12.5 = 150 in = 12.5 ft, one piece of the 16 ft board; level baseboard only on the last 48 in.
+    expect(wall.skirtFeet).toBeCloseTo(12.5, 9);
+    expect(wall.baseboardFeet).toBeCloseTo(4, 9);
+    const skirt = e.takeoff.materials.find((m) => m.label.startsWith('1x6 pine skirt board'));
+    expect(skirt?.quantity).toBe(1);
+    // Rake cuts: backing 3 columns × 2 = 6; battens 8 × 2 = 16; top rail and cap rail each 1 at the foot's
+    // wall end + 2 where they turn level = 3 + 3; skirt 2 → 30.
+    expect(wall.rakeCuts).toBe(30);
+    const cuts = e.price.labour.find((l) => l.task === 'rake-cuts');
+    expect(cuts?.hours).toBeCloseTo(30 * rateBook.labour.hoursPerRakeCut, 9);
+    expect(e.price.labour.find((l) => l.task === 'skirt-board')?.hours).toBeCloseTo(12.5 * rateBook.labour.hoursPerFootBaseboardInstalled, 1);
+  });
+
+  it('gives no code note for a stair inside the code limits', () => {
+    // Source: docs/sources.md §41 — IRC R311.7.5: 7-1/2 in ≤ 7-3/4 in and 10 in ≥ 10 in.
+    expect(e.takeoff.notes.some((n) => /residential code/.test(n))).toBe(false);
+  });
+});
+
+describe('a full-height stair wall in vertical plywood strips', () => {
+  const t = takeoff(stairHall('shiplap-vertical-ply', 'full'), catalogue);
+  const wall = t.rooms[0]!.walls[0]!;
+  it('covers the wall from the skirt to the level ceiling', () => {
+    // Source: docs/sources.md §40 — (204 − 5.5) × 168 = 33,348 sq in, less under the nosing line
+    // 90 × 120 / 2 = 5,400 and 90 × 48 = 4,320: 23,628 sq in ≈ 164.08 sq ft.
+    expect(wall.grossSqFt).toBeCloseTo(23628 / 144, 6);
+  });
+  it('cuts one end of each strip on the rake to the angle', () => {
+    // Strips 5-7/8 in at a 6 in pitch: those starting at 0, 6 … 114 (20) cross the rake, one rake cut each; skirt 2.
+    expect(wall.rakeCuts).toBe(22);
+    // The first strip runs from the skirt at its low side to the ceiling: 204 − 5.5 = 198.5 in, in two lengths.
+    const first = wall.pieces.filter((p) => p.x === 0);
+    expect(first.reduce((s, p) => s + p.height, 0)).toBeCloseTo(198.5, 6);
+  });
+  it('shows the caution for work over a stair', () => {
+    const c = t.cautions.find((x) => x.id === 'stair');
+    expect(c?.text).toMatch(/stair platform/);
+    expect(c?.text).toMatch(/local codes/);
+  });
+});
+
+describe('stair walls: checks and notes', () => {
+  it('older projects without a stair validate as before', () => {
+    const p = stairHall('beadboard', 'wainscot');
+    delete (p.rooms[0]!.walls[0] as Record<string, unknown>).stair;
+    expect(validateProject(p, catalogue).rooms[0]!.walls[0]!.stair).toBeUndefined();
+  });
+
+  it('refuses a stair whose run is longer than the wall, naming the wall in the project units', () => {
+    const f = fieldsOf(() => validateProject(stairHall('beadboard', 'wainscot', { length: 100 }), catalogue));
+    expect(f['rooms.0.walls.0.stair.steps']).toBe(`Stair hall, Stair wall: 12 steps of 10" take 10', more than the wall's 8' 4".`);
+    const m = fieldsOf(() => validateProject(stairHall('beadboard', 'wainscot', { length: 100 }), catalogue, undefined, 'metric'));
+    expect(m['rooms.0.walls.0.stair.steps']).toMatch(/mm|cm|m\b/);
+  });
+
+  it('refuses picture-frame moulding on a stair wall and says why', () => {
+    const f = fieldsOf(() => validateProject(stairHall('picture-frame', 'wainscot'), catalogue));
+    expect(f['rooms.0.walls.0.stair']).toMatch(/not priced online/);
+  });
+
+  it('refuses a window or a fixture over the stair, and accepts one on the level part', () => {
+    const over = fieldsOf(() =>
+      validateProject(stairHall('beadboard', 'wainscot', { openings: [{ kind: 'window', width: 30, height: 40, sillHeight: 30, offset: 20 }] }), catalogue),
+    );
+    expect(over['rooms.0.walls.0.openings']).toMatch(/^Stair hall, Stair wall: a window at 1' 8" would sit over the stair/);
+    // 125 in less its 2-1/4 in casing is 122.75 in, past the stair's 120 in.
+    expect(() =>
+      validateProject(stairHall('beadboard', 'wainscot', { openings: [{ kind: 'window', width: 30, height: 40, sillHeight: 30, offset: 125 }] }), catalogue),
+    ).not.toThrow();
+    const fixture = fieldsOf(() => validateProject(stairHall('beadboard', 'wainscot', { fixtures: [{ kind: 'radiator' }] }), catalogue));
+    expect(fixture['rooms.0.walls.0.fixtures']).toMatch(/over the stair/);
+  });
+
+  it('notes a stair outside the code limits without refusing it', () => {
+    // Source: docs/sources.md §41 — IRC R311.7.5.1 riser ≤ 7-3/4 in, R311.7.5.2 tread ≥ 10 in.
+    const t = takeoff(stairHall('beadboard', 'wainscot', { stair: { steps: 12, rise: 8, run: 9 } }), catalogue);
+    expect(t.notes.filter((n) => /residential code/.test(n))).toHaveLength(2);
+  });
+
+  it('a window on the landing stands on the landing', () => {
+    // Sill 30 in above the landing, which is the stair's climb (90 in) above the foot: drawn at 120 in.
+    const t = takeoff(stairHall('beadboard', 'wainscot', { openings: [{ kind: 'window', width: 30, height: 40, sillHeight: 30, offset: 125 }] }), catalogue);
+    const w = t.rooms[0]!.walls[0]!;
+    expect(w.openings[0]!.sillHeight).toBe(120);
+    // It reaches into the band (5.5–36 in above the landing) from 30 in: a return, and its area comes off.
+    expect(w.returns).toBe(1);
+    expect(w.openingsSqFt).toBeGreaterThan(0);
+  });
+});
