@@ -9,6 +9,7 @@ import { DEFAULT_DOOR, DEFAULT_WINDOW } from './geometry.ts';
 import { treatmentForRoom } from './damp-stock.ts';
 import type { Catalogue, Project, Room, Treatment } from './schemas.ts';
 import { shortestJoinedPiece } from './staggered-joints.ts';
+import { nosingLineLength } from './stair-wall.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
 /**
@@ -162,7 +163,8 @@ export function projectSize(project: Project, catalogue: Catalogue): ProjectSize
       size.openings += openings.length;
       size.boxes += wall.outlets + wall.switches;
       size.coveredSqFt += (length * Math.max(0, bandTopFor(room) - (baseboard?.width ?? 0))) / 144;
-      if (t) size.pieces += wallPieces(room, length, openings, t, catalogue);
+      // Along a stair, rails and courses follow the rake and are longer than the wall (stair-wall.ts).
+      if (t) size.pieces += wallPieces(room, wall.stair ? nosingLineLength(length, wall.stair) : length, openings, t, catalogue);
     }
     return size;
   });

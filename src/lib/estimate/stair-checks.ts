@@ -3,6 +3,7 @@
  * treatment can be priced on a rake, and no door, window or fixture sits over the stair.
  */
 import { tryPlaceFixtures } from './fixtures.ts';
+import { DEFAULT_DOOR, DEFAULT_WINDOW } from './geometry.ts';
 import type { Catalogue, Room, Treatment, Wall } from './schemas.ts';
 import { stairErrors, type Stair } from './stair-wall.ts';
 import { bandTopFor } from './wall-band.ts';
@@ -50,6 +51,20 @@ export function stairWallProblems(a: {
     out[`${wp}.stair`] =
       `${wallName}: picture-frame moulding on a stair wall is not priced online, because frames along a rake are set out on site, each one to the stair's angle. Choose another finish for this room, or ask the firm to measure on site.`;
   }
+  if (a.treatment?.kind === 'shiplap' && a.treatment.orientation === 'horizontal' && full) {
+    out[`${wp}.stair`] =
+      `${wallName}: horizontal boards to the ceiling on a stair wall are not priced online, because every course under the rake is a different length with its own angled ends. Choose a wainscot height, vertical boards, or ask the firm to measure on site.`;
+  }
+  if (Object.keys(out).length > 0) return out;
+  // Doors and windows stand on the landing, which is the stair's climb above the foot (docs/sources.md §40).
+  const climb = stair.steps * stair.rise;
+  wall.openings.forEach((o, i) => {
+    const d = o.kind === 'door' ? DEFAULT_DOOR : DEFAULT_WINDOW;
+    const topAbove = (o.sillHeight ?? d.sillHeight) + (o.height ?? d.height);
+    if (climb + topAbove > room.ceilingHeight + 1e-6)
+      out[`${wp}.openings.${i}.height`] =
+        `${wallName}: this opening stands on the landing, ${len(climb)} above the foot of the stair, so its top (${len(topAbove)} above the landing) would be above the ${len(room.ceilingHeight)} ceiling.`;
+  });
   if (Object.keys(out).length > 0) return out;
   // Over the stair there is no floor for a door, and the band's cuts at the rake leave no room for an
   // opening's returns: doors, windows and fixtures go on the level part of the wall.

@@ -1,5 +1,6 @@
+import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
-import { estimate, parseRateBook, sampleRateBook, takeoff, validateProject, type ProjectInput } from './index.ts';
+import { estimate, parseRateBook, projectSize, sampleRateBook, takeoff, validateProject, type ProjectInput } from './index.ts';
 import { fieldsOf } from './input-refusal.testing.ts';
 
 const rateBook = parseRateBook(sampleRateBook());
@@ -137,6 +138,20 @@ describe('stair walls: checks and notes', () => {
     expect(fixture['rooms.0.walls.0.fixtures']).toMatch(/over the stair/);
   });
 
+  it('refuses horizontal boards to the ceiling on a stair wall, and accepts them as a wainscot', () => {
+    const f = fieldsOf(() => validateProject(stairHall('shiplap-horizontal', 'full'), catalogue));
+    expect(f['rooms.0.walls.0.stair']).toMatch(/^Stair hall, Stair wall: horizontal boards to the ceiling/);
+    expect(() => validateProject(stairHall('shiplap-horizontal', 'wainscot'), catalogue)).not.toThrow();
+  });
+
+  it('refuses a door on the landing that would reach above the ceiling', () => {
+    // The landing is 90 in above the foot: an 80 in door there tops out at 170 in, under a 204 in ceiling but over a 160 in one.
+    const door = { openings: [{ kind: 'door', width: 30, height: 80, sillHeight: 0, offset: 130 }] };
+    expect(() => validateProject(stairHall('beadboard', 'wainscot', door), catalogue)).not.toThrow();
+    const f = fieldsOf(() => validateProject(stairHall('beadboard', 'wainscot', door, { ceilingHeight: 160 }), catalogue));
+    expect(f['rooms.0.walls.0.openings.0.height']).toMatch(/landing/);
+  });
+
   it('notes a stair outside the code limits without refusing it', () => {
     // Source: docs/sources.md §41 — IRC R311.7.5.1 riser ≤ 7-3/4 in, R311.7.5.2 tread ≥ 10 in.
     const t = takeoff(stairHall('beadboard', 'wainscot', { stair: { steps: 12, rise: 8, run: 9 } }), catalogue);
@@ -151,5 +166,44 @@ describe('stair walls: checks and notes', () => {
     // It reaches into the band (5.5–36 in above the landing) from 30 in: a return, and its area comes off.
     expect(w.returns).toBe(1);
     expect(w.openingsSqFt).toBeGreaterThan(0);
+  });
+});
+
+describe('the size check sees a stair wall coming', () => {
+  const treatments = ['shiplap-vertical-ply', 'shiplap-horizontal', 'board-and-batten', 'beadboard', 'flat-panel'] as const;
+  // The check must count ahead at least the pieces the takeoff lays (project-size.ts), stair walls included.
+  fcTest.prop(
+    [
+      fc.record({
+        steps: fc.integer({ min: 1, max: 30 }),
+        rise: fc.integer({ min: 3, max: 12 }),
+        run: fc.integer({ min: 6, max: 24 }),
+        extra: fc.integer({ min: 0, max: 480 }),
+        treatment: fc.constantFrom(...treatments),
+        wainscotHeight: fc.integer({ min: 24, max: 48 }),
+      }),
+    ],
+    { numRuns: 60, seed: 20261202 },
+  )('counts at least the pieces the takeoff lays', (c) => {
+    const length = Math.min(1200, Math.max(12, c.steps * c.run + c.extra));
+    // The wainscot at the top of the stair must stay under the 240 in ceiling (else the stair is refused).
+    fc.pre(c.steps * c.rise + c.wainscotHeight <= 240 && c.steps * c.run <= length);
+    const p = validateProject(
+      {
+        rooms: [
+          {
+            name: 'Stair hall',
+            ceilingHeight: 240,
+            walls: [{ length, stair: { steps: c.steps, rise: c.rise, run: c.run } }],
+            treatment: { id: c.treatment, height: 'wainscot', wainscotHeight: c.wainscotHeight },
+          },
+        ],
+        builtBefore1978: 'no',
+        measuredBy: 'homeowner-tape',
+      },
+      catalogue,
+    );
+    const laid = takeoff(p, catalogue).rooms[0]!.walls[0]!.pieces.length;
+    expect(projectSize(p, catalogue).rooms[0]!.pieces).toBeGreaterThanOrEqual(laid);
   });
 });

@@ -1,7 +1,7 @@
 /**
  * A wall along a stair: the line of nosings climbs from the stair's start end over `steps × run` and
  * the rest of the wall is level at the top. The covered band follows that line (docs/sources.md §40).
- * Pure geometry and checks; not yet wired into the takeoff (see the report on this slice).
+ * Pure geometry and checks; the takeoff uses them through stair-takeoff.ts and stair-checks.ts.
  */
 import { z } from 'zod';
 import { formatLength, type Units } from './units.ts';
@@ -56,6 +56,12 @@ export function stairGeometry(wallLength: number, stair: Stair): StairGeometry {
     ],
     nosingAt,
   };
+}
+
+/** Length of the nosing line across a wall: along the rake over the stair, level beyond (a rail or course that follows it). */
+export function nosingLineLength(wallLength: number, stair: Stair): number {
+  const run = Math.min(wallLength, stair.steps * stair.run);
+  return wallLength - run + (run * Math.hypot(stair.rise, stair.run)) / stair.run;
 }
 
 /** Skirt board length along the rake: steps × √(rise² + run²). Source: docs/sources.md §40 (Pythagoras). */
