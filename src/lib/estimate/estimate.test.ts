@@ -209,19 +209,42 @@ describe('properties of the price', () => {
     measuredBy: fc.constantFrom('homeowner-estimate' as const, 'homeowner-tape' as const, 'site-measure' as const),
     photos: fc.integer({ min: 0, max: 3 }),
     moreOutlets: fc.integer({ min: 1, max: 3 }),
+    // Sometimes one more wall along a stair (docs/sources.md §40), and a stair with more steps.
+    stair: fc.option(
+      fc.record({
+        steps: fc.integer({ min: 1, max: 8 }),
+        rise: fc.integer({ min: 5, max: 7 }),
+        run: fc.integer({ min: 9, max: 12 }),
+        startsAt: fc.constantFrom('left' as const, 'right' as const),
+      }),
+      { nil: undefined },
+    ),
+    moreSteps: fc.integer({ min: 1, max: 2 }),
   });
   type Grown = typeof grown extends fc.Arbitrary<infer T> ? T : never;
-  const room = (c: Grown, length: number, ceilingHeight: number, walls: number, more: { wainscot?: number; outlets?: number } = {}): ProjectInput => ({
+  const room = (
+    c: Grown,
+    length: number,
+    ceilingHeight: number,
+    walls: number,
+    more: { wainscot?: number; outlets?: number; steps?: number } = {},
+  ): ProjectInput => ({
     rooms: [
       {
         name: 'Test room',
-        ceilingHeight,
-        // The first wall carries the openings; the others are plain walls of the same length.
-        walls: Array.from({ length: walls }, (_, i) => ({
-          length,
-          outlets: c.outlets + (more.outlets ?? 0),
-          openings: i === 0 ? c.openings.map((o) => ({ ...o, ...(o.offset !== undefined ? { count: 1 } : {}) })) : [],
-        })),
+        // A room with a stair is as much taller as the longest stair climbs, in every variant alike, so
+        // the band still fits over the top of the stair (at most 144 + 24 + 10 × 7 = 238 in).
+        ceilingHeight: ceilingHeight + (c.stair ? (c.stair.steps + c.moreSteps) * c.stair.rise : 0),
+        // The first wall carries the openings; the others are plain walls of the same length, and the
+        // stair, when there is one, runs along a wall of its own after them.
+        walls: [
+          ...Array.from({ length: walls }, (_, i) => ({
+            length,
+            outlets: c.outlets + (more.outlets ?? 0),
+            openings: i === 0 ? c.openings.map((o) => ({ ...o, ...(o.offset !== undefined ? { count: 1 } : {}) })) : [],
+          })),
+          ...(c.stair ? [{ length, outlets: c.outlets + (more.outlets ?? 0), stair: { ...c.stair, steps: c.stair.steps + (more.steps ?? 0) } }] : []),
+        ],
         treatment: {
           id: c.treatment,
           height: c.height,
@@ -270,6 +293,11 @@ describe('properties of the price', () => {
         // wainscot whose band rises past a window's sill still finds cheaper layouts, e.g. 24 → 25 in
         // on a 60 in wall with a 44 × 24 in window at 20 in.)
         room(c, c.length, c.ceiling, c.walls, { outlets: c.moreOutlets }),
+        // More steps along a stair wall, where they still fit the wall and the ceiling. Only for a
+        // wainscot: to the ceiling, a longer stair leaves less wall to cover, and rightly costs less.
+        ...(c.stair && c.height === 'wainscot' && (c.stair.steps + c.moreSteps) * c.stair.run <= c.length
+          ? [room(c, c.length, c.ceiling, c.walls, { steps: c.moreSteps })]
+          : []),
       ]) {
         const b = priced(bigger);
         // Every opening that fits a wall fits a longer, taller one.

@@ -8,13 +8,16 @@ export function stairLabour(takeoff: Takeoff, labour: RateBook['labour']): Labou
   const skirtFeet = takeoff.rooms.reduce((s, r) => s + (r.skirtFeet ?? 0), 0);
   const rakeCuts = takeoff.rooms.reduce((s, r) => s + (r.rakeCuts ?? 0), 0);
   const lines: LabourLine[] = [];
-  // A skirt board goes on like a baseboard, at the baseboard's rate per foot (common practice, no source).
-  if (skirtFeet > 0 && labour.hoursPerFootBaseboardInstalled > 0)
+  // The old skirt board along the stair comes off and the new one goes on, at the baseboard's rates per
+  // foot (common practice, no source). Counting the removal keeps a longer stair from costing less than
+  // the level baseboard it replaces.
+  const perFoot = labour.hoursPerFootBaseboardRemoved + labour.hoursPerFootBaseboardInstalled;
+  if (skirtFeet > 0 && perFoot > 0)
     lines.push({
       task: 'skirt-board',
-      label: 'Install skirt board along the stair',
-      hours: skirtFeet * labour.hoursPerFootBaseboardInstalled,
-      basis: `${r2(skirtFeet)} ft × ${labour.hoursPerFootBaseboardInstalled} h per ft`,
+      label: 'Replace the skirt board along the stair',
+      hours: skirtFeet * perFoot,
+      basis: `${r2(skirtFeet)} ft × (${labour.hoursPerFootBaseboardRemoved} h to remove + ${labour.hoursPerFootBaseboardInstalled} h to install) per ft`,
     });
   if (rakeCuts > 0 && labour.hoursPerRakeCut > 0)
     lines.push({

@@ -75,7 +75,10 @@ describe('a stair wall in board and batten, wainscot 36 in above the nosing (han
     expect(wall.rakeCuts).toBe(30);
     const cuts = e.price.labour.find((l) => l.task === 'rake-cuts');
     expect(cuts?.hours).toBeCloseTo(30 * rateBook.labour.hoursPerRakeCut, 9);
-    expect(e.price.labour.find((l) => l.task === 'skirt-board')?.hours).toBeCloseTo(12.5 * rateBook.labour.hoursPerFootBaseboardInstalled, 1);
+    expect(e.price.labour.find((l) => l.task === 'skirt-board')?.hours).toBeCloseTo(
+      12.5 * (rateBook.labour.hoursPerFootBaseboardRemoved + rateBook.labour.hoursPerFootBaseboardInstalled),
+      1,
+    );
   });
 
   it('gives no code note for a stair inside the code limits', () => {

@@ -39,11 +39,25 @@ export function rakedColumnTop(r: Rake, x0: number, x1: number, top: number): nu
   return r.full ? top - lo : top + (hi - lo);
 }
 
-/** Rake cuts a column [x0, x1] takes: two in a wainscot (top and bottom follow the rake), one full height. */
-export function columnRakeCuts(r: Rake, x0: number, x1: number): number {
-  const { lo, hi } = nosingRange(r, x0, x1);
-  if (hi - lo <= EPS) return 0;
-  return r.full ? 1 : 2;
+/**
+ * Rake cuts in one layer of columns (sheets, strips or uprights) set `pitch` apart: every column over
+ * the stair is cut to the angle, two ends in a wainscot (top and bottom follow the rake), one full
+ * height (the ceiling end is square). Counted from the stair's run, ceil(run / pitch) columns, rather
+ * than from where the columns happen to land, so a longer wall never has fewer (docs/sources.md §43).
+ */
+export function columnRakeCuts(r: Rake, pitch: number): number {
+  const run = r.span[1] - r.span[0];
+  return Math.ceil(run / pitch - 1e-9) * (r.full ? 1 : 2);
+}
+
+/**
+ * Columns set out from the foot of the stair: from the left end as planned when the stair starts
+ * there, mirrored when it starts at the right end. Anchored at the foot, the columns over the stair
+ * stay where they are as the wall grows; the ripped column goes to the far end.
+ */
+export function footFirst<T extends { start: number; width: number }>(r: Rake | undefined, length: number, positions: T[]): T[] {
+  if (!r || r.stair.startsAt === 'left') return positions;
+  return positions.map((p) => ({ ...p, start: length - p.start - p.width }));
 }
 
 /** Height of the nosing line under the low side of [x0, x1]: lifts a piece from the nosing frame to the wall for drawings. */

@@ -20,7 +20,7 @@ import { checkProjectSize } from './project-size.ts';
 import { treatmentForRoom } from './damp-stock.ts';
 import { validateProject } from './validate.ts';
 import { skirtStock } from './stair-checks.ts';
-import { columnRakeCuts, developed, liftAt, rakedColumnTop, rakeOf, runRakeCuts, undeveloped, type Rake } from './stair-takeoff.ts';
+import { columnRakeCuts, developed, footFirst, liftAt, rakedColumnTop, rakeOf, runRakeCuts, undeveloped, type Rake } from './stair-takeoff.ts';
 import { rakedBandArea, skirtLength, stairNotes } from './stair-wall.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
@@ -171,17 +171,17 @@ function runPlan(t: Treatment, runLength: number, width: number, gap: number): R
 /** Panels or backing sheets laid side by side across the wall, full sheet width, butted. */
 function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel', t: Treatment): void {
   const longSide = Math.max(sheet.width, sheet.height);
-  for (const col of runPlan(t, ctx.length, sheet.width, 0).positions) {
+  for (const col of footFirst(ctx.rake, ctx.length, runPlan(t, ctx.length, sheet.width, 0).positions)) {
     const slices = columnSlices(ctx, col.start, col.start + col.width);
     for (const sl of slices) {
       for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.ripped });
     }
-    if (ctx.rake && slices.length > 0) ctx.rakeCuts += columnRakeCuts(ctx.rake, col.start, col.start + col.width);
     // A panel notched around an opening still comes from one piece of the sheet.
     for (const [y0, y1] of columnCuts(slices)) {
       for (const len of splitFull(y1 - y0, longSide)) addSheetPiece(ctx.reg, sheet.id, col.width, len);
     }
   }
+  if (ctx.rake) ctx.rakeCuts += columnRakeCuts(ctx.rake, sheet.width);
 }
 
 function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>): BoardLayout {
@@ -201,13 +201,13 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
   };
   if (t.orientation === 'vertical') {
     const plan = runPlan(t, ctx.length, faceWidth, t.gap);
-    plan.positions.forEach((b) => {
+    footFirst(ctx.rake, ctx.length, plan.positions).forEach((b) => {
       const ripped = b.ripped;
       const slices = columnSlices(ctx, b.start, b.start + b.width);
       for (const sl of slices) for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped });
       for (const [y0, y1] of columnCuts(slices)) for (const len of splitFull(y1 - y0, maxLen)) cut(len);
-      if (ctx.rake && slices.length > 0) ctx.rakeCuts += columnRakeCuts(ctx.rake, b.start, b.start + b.width);
     });
+    if (ctx.rake) ctx.rakeCuts += columnRakeCuts(ctx.rake, faceWidth + t.gap);
     return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
   }
   const height = ctx.bandTop - ctx.bandBottom;
@@ -254,13 +254,13 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
   const blocked = ctx.openings
     .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01)
     .map((o) => [o.offset, o.offset + o.width] as const);
+  if (ctx.rake) ctx.rakeCuts += columnRakeCuts(ctx.rake, spacing);
   for (const [a, b] of subtractIntervals([0, ctx.length], blocked, w - 1e-9)) {
     const run = b - a;
     const n = run <= 2 * w ? 1 : Math.ceil((run - w) / spacing - 1e-9) + 1;
     const pitch = n > 1 ? (run - w) / (n - 1) : 0;
     for (let i = 0; i < n; i++) {
       const x = a + i * pitch;
-      if (ctx.rake) ctx.rakeCuts += columnRakeCuts(ctx.rake, x, x + w);
       for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
         let y = y0;
         for (const len of splitFull(y1 - y0, board.length)) {
@@ -672,7 +672,8 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     ...(skirtFeet > 0 ? { skirtFeet, rakeCuts } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
     // The old baseboard is taken to be as tall as the new one.
-    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,
+    // The old skirt board on a stair wall comes off in full too.
+    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width + (skirtFeet > 0 ? skirtFeet * skirtStock(catalogue).width : 0)) / 12,
     panelSqFt,
     trimFeet,
     caulkFeet,
