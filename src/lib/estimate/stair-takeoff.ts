@@ -84,17 +84,11 @@ export function undeveloped(r: Rake, u: number): number {
 
 /**
  * Rake cuts for a run [x0, x1] that follows the nosing line (a rail, a cap rail, a course of boards):
- * an end on the rake is cut plumb, and where the run turns level at the top of the stair the two
- * pieces meet in an angled joint, one cut each (common practice, no source).
+ * one at the foot, where it is cut plumb, and two at the top, where it turns level in an angled joint
+ * (or meets the wall's end and is fitted there). Counted the same wherever the stair ends, so more steps
+ * never count fewer (common practice, no source; docs/sources.md §43).
  */
 export function runRakeCuts(r: Rake, x0: number, x1: number): number {
   const [a, b] = r.span;
-  if (Math.min(x1, b) - Math.max(x0, a) <= EPS) return 0;
-  const top = r.stair.startsAt === 'left' ? b : a;
-  let cuts = 0;
-  // Ends of the run that fall on the rake (the wall end at the foot, or where the stair meets the wall's end).
-  for (const end of [x0, x1]) if (end >= a - EPS && end <= b + EPS) cuts += 1;
-  // The turn at the top of the stair, when the run continues past it.
-  if (top > x0 + EPS && top < x1 - EPS) cuts += 2;
-  return cuts;
+  return Math.min(x1, b) - Math.max(x0, a) > EPS ? 3 : 0;
 }
