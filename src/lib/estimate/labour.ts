@@ -83,6 +83,13 @@ export function labourAndVisits(takeoff: Takeoff, rateBook: RateBook): { lines: 
     sum((r) => r.backBandFeet ?? 0),
     L.hoursPerFootBackBand,
   );
+  perItem(
+    'stool-refit',
+    'Refit window stools and aprons',
+    sum((r) => r.stoolRefits ?? 0),
+    L.hoursPerStoolRefit,
+    'windows',
+  );
   lines.push(...fixtureLabour(takeoff, L.hoursPerFixture));
   // Install days count every hour so far (install, trim, cut-outs); painting comes on its own visits.
   const installHours = lines.reduce((a, l) => a + l.hours, 0);

@@ -19,6 +19,7 @@ import { formatLength, type Units } from './units.ts';
 import { checkProjectSize } from './project-size.ts';
 import { treatmentForRoom } from './damp-stock.ts';
 import { validateProject } from './validate.ts';
+import { proudOfStool, stoolAndApronSqIn, windowsWithStoolInBand } from './window-stool.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
 export { bandTopFor, wallLength };
@@ -398,6 +399,30 @@ function backBandAtCasings(ctx: WallContext, openings: PlacedOpening[], t: Treat
   return feet;
 }
 
+/**
+ * Windows on a wall whose stool the new work meets and would stand proud of: their stool and apron are
+ * taken off and refitted (window-stool.ts), with a note. Returns how many, and the painted surface
+ * that comes off with them.
+ */
+function stoolRefitsOnWall(
+  openings: PlacedOpening[],
+  bandBottom: number,
+  bandTop: number,
+  t: Treatment,
+  catalogue: Catalogue,
+  label: string,
+  units: Units,
+  notes: string[],
+): { length: number; paintSqIn: number } {
+  const met = windowsWithStoolInBand(openings, bandBottom, bandTop);
+  if (met.length === 0 || proudOfStool(t, catalogue) <= 0) return { length: 0, paintSqIn: 0 };
+  const out = newFaceThickness(t, catalogue) + catalogue.casing.thickness;
+  notes.push(
+    `On ${label}, the new face with the apron reset on it stands ${formatLength(out, units)} out from the wall, past the ${formatLength(catalogue.stoolProjection, units)} window ${met.length === 1 ? 'stool' : 'stools'}, which should stay ${formatLength(CASING_REVEAL, units)} further out: the stool and apron ${met.length === 1 ? 'of the window are' : `of ${met.length} windows are`} taken off and refitted (extended, re-cut or replaced).`,
+  );
+  return { length: met.length, paintSqIn: met.reduce((sum, o) => sum + stoolAndApronSqIn(o, catalogue), 0) };
+}
+
 function wallTakeoff(
   room: Room,
   wall: Wall,
@@ -406,7 +431,7 @@ function wallTakeoff(
   catalogue: Catalogue,
   reg: CutRegistry,
   units: Units,
-): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number } {
+): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number; stoolRefits: number; stoolPaintSqIn: number } {
   const length = wallLength(room, wall);
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
@@ -536,6 +561,7 @@ function wallTakeoff(
     );
   }
   const backBandFeet = backBandAtCasings(ctx, openings, t, label, units, notes);
+  const stools = stoolRefitsOnWall(openings, bandBottom, bandTop, t, catalogue, label, units, notes);
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;
   const out: WallTakeoff = {
@@ -562,7 +588,7 @@ function wallTakeoff(
     baseboardFeet,
     notes,
   };
-  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet };
+  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet, stoolRefits: stools.length, stoolPaintSqIn: stools.paintSqIn };
 }
 
 function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
@@ -572,11 +598,15 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   let trimFeet = 0;
   let caulkFeet = 0;
   let backBandFeet = 0;
+  let stoolRefits = 0;
+  let stoolPaintSqIn = 0;
   const walls = room.walls.map((w, i) => {
     const wt = wallTakeoff(room, w, i, t, catalogue, reg, units);
     trimFeet += wt.trimFeet;
     caulkFeet += wt.caulkFeet;
     backBandFeet += wt.backBandFeet;
+    stoolRefits += wt.stoolRefits;
+    stoolPaintSqIn += wt.stoolPaintSqIn;
     return wt.wall;
   });
   const sum = (f: (w: WallTakeoff) => number): number => walls.reduce((s, w) => s + f(w), 0);
@@ -632,9 +662,10 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     baseboardRemovedFeet,
     ...(baseboardReset ? { baseboardReset: true } : {}),
     ...(backBandFeet > 0 ? { backBandFeet } : {}),
+    ...(stoolRefits > 0 ? { stoolRefits } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
-    // The old baseboard is taken to be as tall as the new one.
-    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12,
+    // The old baseboard is taken to be as tall as the new one; refitted stools and aprons count too.
+    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width) / 12 + stoolPaintSqIn / 144,
     panelSqFt,
     trimFeet,
     caulkFeet,

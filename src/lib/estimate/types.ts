@@ -121,6 +121,8 @@ export interface RoomTakeoff {
   baseboardReset?: boolean;
   /** Back band added around casings the new work stands proud of (docs/sources.md §31). */
   backBandFeet?: number;
+  /** Windows whose stool and apron are taken off and refitted, the new work standing proud of the stool (docs/sources.md §51). */
+  stoolRefits?: number;
   /** Painted surface disturbed by the work (removed baseboard counts in full), for the lead-safe rule. */
   disturbedPaintSqFt: number;
   /** Area of boards or sheets glued and nailed to the wall (drives adhesive, brads and filler). */
@@ -188,6 +190,7 @@ export interface LabourLine {
     | 'baseboard'
     | 'cap-rail'
     | 'back-band'
+    | 'stool-refit'
     | 'paint'
     | 'setup'
     | 'fixture-reset'
