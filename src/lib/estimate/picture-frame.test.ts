@@ -86,6 +86,26 @@ describe('picture-frame wainscot under a window sill', () => {
     expect(wallAt(86, window).price.totalCents).toBeGreaterThanOrEqual(wallAt(84, window).price.totalCents);
   });
 
+  it('costs no less when a given wainscot rises from 24 to 25 in past a 44 × 24 in window at 20 in', () => {
+    const at = (wainscotHeight: number) =>
+      estimate(
+        {
+          rooms: [
+            {
+              name: 'Study',
+              ceilingHeight: 96,
+              walls: [{ length: 60, outlets: 0, openings: [{ kind: 'window', width: 44, height: 24, sillHeight: 20 }] }],
+              treatment: { id: 'picture-frame', height: 'wainscot', wainscotHeight },
+            },
+          ],
+          builtBefore1978: 'no',
+          measuredBy: 'site-measure',
+        },
+        noMinimum,
+      ).price.totalCents;
+    expect(at(25)).toBeGreaterThanOrEqual(at(24));
+  });
+
   it('lays a shorter frame under the sill and a full one beside the window', () => {
     // Worked by hand. Ceiling 116 in: wainscot top round(116 / 3) = 39 in; frames from 5.25 + 4 =
     // 9.25 in to 39 − 4 = 35 in (25.75 in tall). The counted 36 × 60 in window is set 3 in from the
