@@ -86,6 +86,7 @@ export interface WallTakeoff {
   cutOuts: number;
   returns: number;
   boards?: BoardLayout;
+  /** Picture frames: how many, and their average width and height (frames under a window's sill are shorter). */
   frames?: { count: number; width: number; height: number };
   /** On a stair wall: the nosing line's low and high ends, in wall inches (stair-wall.ts, docs/sources.md §40). */
   rake?: [{ x: number; y: number }, { x: number; y: number }];
