@@ -85,6 +85,13 @@ export function labourAndVisits(takeoff: Takeoff, rateBook: RateBook): { lines: 
     L.hoursPerFootBackBand,
   );
   lines.push(...stairLabour(takeoff, L));
+  perItem(
+    'stool-refit',
+    'Refit window stools and aprons',
+    sum((r) => r.stoolRefits ?? 0),
+    L.hoursPerStoolRefit,
+    'windows',
+  );
   lines.push(...fixtureLabour(takeoff, L.hoursPerFixture));
   // Install days count every hour so far (install, trim, cut-outs); painting comes on its own visits.
   const installHours = lines.reduce((a, l) => a + l.hours, 0);

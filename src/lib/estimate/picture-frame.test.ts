@@ -51,3 +51,74 @@ describe('picture-frame wainscot on a 12 ft wall', () => {
     expect(cap).toMatchObject({ cuts: 2, quantity: 2 });
   });
 });
+
+// Frames under a window: where the frames' band rises past a sill, the frames below the window are
+// laid in the space under it (shorter), not dropped. Demo rate book without its minimum job, so a
+// small wall's own price shows. The wainscot height is the default, a third of the ceiling
+// (docs/sources.md §8), rounded to the inch.
+describe('picture-frame wainscot under a window sill', () => {
+  const noMinimum = { ...rateBook, minimumJobCents: 0 };
+  const wallAt = (ceilingHeight: number, window: { width?: number; height?: number; sillHeight: number }) =>
+    estimate(
+      {
+        rooms: [
+          {
+            name: 'Study',
+            ceilingHeight,
+            walls: [{ label: 'Window wall', length: 60, outlets: 0, openings: [{ kind: 'window', ...window }] }],
+            treatment: { id: 'picture-frame', height: 'wainscot' },
+          },
+        ],
+        builtBefore1978: 'no',
+        measuredBy: 'site-measure',
+      },
+      noMinimum,
+    );
+
+  // Common practice, no source: a bigger wall never costs less (docs/sources.md §50).
+  it('costs no less when the ceiling rises from 114 to 116 in and the band passes a 34 in sill', () => {
+    const window = { sillHeight: 34 };
+    expect(wallAt(116, window).price.totalCents).toBeGreaterThanOrEqual(wallAt(114, window).price.totalCents);
+  });
+
+  it('costs no less when the ceiling rises from 84 to 86 in past a 41 × 24 in window at 24 in', () => {
+    const window = { width: 41, height: 24, sillHeight: 24 };
+    expect(wallAt(86, window).price.totalCents).toBeGreaterThanOrEqual(wallAt(84, window).price.totalCents);
+  });
+
+  it('costs no less when a given wainscot rises from 24 to 25 in past a 44 × 24 in window at 20 in', () => {
+    const at = (wainscotHeight: number) =>
+      estimate(
+        {
+          rooms: [
+            {
+              name: 'Study',
+              ceilingHeight: 96,
+              walls: [{ length: 60, outlets: 0, openings: [{ kind: 'window', width: 44, height: 24, sillHeight: 20 }] }],
+              treatment: { id: 'picture-frame', height: 'wainscot', wainscotHeight },
+            },
+          ],
+          builtBefore1978: 'no',
+          measuredBy: 'site-measure',
+        },
+        noMinimum,
+      ).price.totalCents;
+    expect(at(25)).toBeGreaterThanOrEqual(at(24));
+  });
+
+  it('lays a shorter frame under the sill and a full one beside the window', () => {
+    // Worked by hand. Ceiling 116 in: wainscot top round(116 / 3) = 39 in; frames from 5.25 + 4 =
+    // 9.25 in to 39 − 4 = 35 in (25.75 in tall). The counted 36 × 60 in window is set 3 in from the
+    // left end (geometry.ts) with 2-1/4 in casings: it blocks 0.75 to 41.25 in, sill at 34 in.
+    // Under it: 4 in margin below the sill, so frames from 9.25 to 30 in (20.75 in tall), across
+    // 4 (the wall-end margin) to 41.25 in = 37.25 in: one 30 in frame centred, at 7.625 in.
+    // Beside it: 41.25 + 4 = 45.25 to 60 − 4 = 56 in, 10.75 in wide, one frame the full 25.75 in.
+    const wall = wallAt(116, { sillHeight: 34 }).takeoff.rooms[0]!.walls[0]!;
+    const frames = wall.pieces.filter((p) => p.role === 'frame').map((p) => [p.x, p.y, p.width, p.height]);
+    expect(frames).toEqual([
+      [7.625, 9.25, 30, 20.75],
+      [45.25, 9.25, 10.75, 25.75],
+    ]);
+    expect(wall.frames?.count).toBe(2);
+  });
+});

@@ -50,6 +50,7 @@ export function sampleRateBook(): RateBookInput {
       skirtBoardId: 'pine-1x6-16',
       casing: { width: 2.25, thickness: 0.6875 }, // demo values, the common stock casing (docs/sources.md §30)
       backBandId: 'back-band',
+      stoolProjection: 1.5, // the usual stool, from memory (docs/sources.md §51)
       insideCornerTrimId: 'corner-in',
       outsideCornerTrimId: 'corner-out',
       supplies: {
@@ -197,6 +198,7 @@ export function sampleRateBook(): RateBookInput {
       hoursPerFootCapRail: 0.06,
       hoursPerFootBackBand: 0.05, // demo value
       hoursPerRakeCut: 0.1, // demo value
+      hoursPerStoolRefit: 1.5, // demo value
       paintSqFtPerHour: 80,
       setupHoursPerVisit: 1,
       hoursPerDay: 8,

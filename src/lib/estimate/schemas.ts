@@ -400,6 +400,12 @@ export const catalogueSchema = z.strictObject({
    * baseboard is taken off and reset on the new face (build-up.ts). Default 1/2 in: from memory.
    */
   existingBaseboardThickness: inches('Existing baseboard thickness', 0, 2).default(0.5),
+  /**
+   * How far the existing window stools (the sill's inside ledge) stand out from the wall face: where the
+   * new work plus the apron reset on it would come past it, the stool and apron are refitted
+   * (window-stool.ts). Default 1-1/2 in: from memory, docs/sources.md §51.
+   */
+  stoolProjection: inches('Window stool projection', 0, 6).default(1.5),
   casing: z.strictObject({ width: inches('Casing width', 0, 12), thickness: inches('Casing thickness', 0, 2) }).default({ width: 2.25, thickness: 0.6875 }),
   /** Mouldings set in each inside and outside corner, the band's height; none when left out. */
   insideCornerTrimId: stockId('Inside corner trim').optional(),
@@ -430,6 +436,8 @@ export const rateBookSchema = z
       hoursPerFootBackBand: num('Time per foot of back band', 'hours', 0, 2).default(0),
       /** Marking, cutting and fitting one end cut to the stair's angle (docs/sources.md §43; common practice, no source). */
       hoursPerRakeCut: num('Time per rake cut', 'hours', 0, 2).default(0.1),
+      /** Taking off and refitting one window's stool and apron (extended, re-cut or replaced) where the new work stands proud of it. */
+      hoursPerStoolRefit: num('Time per window stool refit', 'hours', 0, 24).default(0),
       paintSqFtPerHour: num('Painting productivity', 'sq ft per hour', 1, 1000),
       /** Older rate books charged set-up per room; kept so they still parse, and used when the per-visit figure is missing. */
       setupHoursPerRoom: num('Set-up and clean-up per room', 'hours', 0, 24).optional(),

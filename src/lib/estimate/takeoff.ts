@@ -22,6 +22,7 @@ import { validateProject } from './validate.ts';
 import { skirtStock } from './stair-checks.ts';
 import { columnRakeCuts, developed, footFirst, liftAt, rakedColumnTop, rakeOf, runRakeCuts, undeveloped, type Rake } from './stair-takeoff.ts';
 import { rakedBandArea, skirtLength, stairNotes } from './stair-wall.ts';
+import { proudOfStool, stoolAndApronSqIn, windowsWithStoolInBand } from './window-stool.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
 export { bandTopFor, wallLength };
@@ -325,6 +326,37 @@ function rowRun(
   return { pieces, joints: row.joints };
 }
 
+/** A stretch of wall that takes a line of frames: between openings, or under one window's sill. */
+interface FrameStretch {
+  x0: number;
+  x1: number;
+  /** Top of the frames here: the frames' top, or a margin under the sill of the window above. */
+  top: number;
+  underSill: boolean;
+}
+
+/**
+ * Where frames go on a wall: the stretches between openings (each opening and a margin around it left
+ * clear), and under each window the space below its sill, less the margin, where the frames are
+ * shorter. Every opening splits the frames whatever the band's height, so the stretches do not change
+ * as the band rises past a sill: the frames under it only stop growing, and none is dropped (a line
+ * of frames that re-divided around a window once the band reached its sill could cost less).
+ */
+function frameStretches(ctx: WallContext, margin: number, bottom: number, top: number, minSide: number): FrameStretch[] {
+  const clear = ctx.openings.map((o) => [o.offset - margin, o.offset + o.width + margin] as const);
+  const out: FrameStretch[] = subtractIntervals([margin, ctx.length - margin], clear, minSide).map(([x0, x1]) => ({ x0, x1, top, underSill: false }));
+  ctx.openings.forEach((o, i) => {
+    // A door (or a fixture from the floor) leaves no room under it: its sill is at the floor.
+    const underTop = Math.min(top, o.sillHeight - margin);
+    if (underTop - bottom < minSide) return;
+    const others = clear.filter((_, j) => j !== i);
+    for (const [x0, x1] of subtractIntervals([Math.max(margin, o.offset), Math.min(ctx.length - margin, o.offset + o.width)], others, minSide)) {
+      out.push({ x0, x1, top: underTop, underSill: true });
+    }
+  });
+  return out.sort((p, q) => p.x0 - q.x0);
+}
+
 function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-frame' }>, rows: number): WallTakeoff['frames'] {
   const moulding = ctx.catalogue.mouldings.find((m) => m.id === t.mouldingId)!;
   const lengths = stockLengthsOf(moulding);
@@ -336,40 +368,41 @@ function layFrames(ctx: WallContext, t: Extract<Treatment, { kind: 'picture-fram
   // A frame narrower or shorter than about three moulding widths has no opening left to read as a frame.
   const minSide = Math.max(6, 3 * moulding.width);
   if (fh < minSide) return { count: 0, width: 0, height: 0 };
-  const blocked = ctx.openings
-    .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0)
-    .map((o) => [o.offset - m, o.offset + o.width + m] as const);
   let count = 0;
   let widthSum = 0;
-  for (const [a, b] of subtractIntervals([m, ctx.length - m], blocked, minSide)) {
-    const s = b - a;
+  let heightSum = 0;
+  const frame = (x: number, y: number, fw: number, h: number): void => {
+    ctx.pieces.push({ role: 'frame', x, y, width: fw, height: h });
+    // Source: docs/sources.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
+    for (const side of [fw, fw, h, h]) {
+      // A side longer than the moulding comes from a longer length the firm lists, or is joined.
+      const cut = stockCutFor(lengths, side, moulding.thickness);
+      addCuts(ctx.reg.lengths, lengthKey(moulding, cut.stockLength), cut.pieces);
+      ctx.joints += cut.joints;
+    }
+    ctx.trimFeet += (2 * (fw + h)) / 12;
+    ctx.caulkFeet += (4 * (fw + h)) / 12; // outer and inner edges
+    count += 1;
+    widthSum += fw;
+    heightSum += h;
+  };
+  for (const st of frameStretches(ctx, m, bottom, top, minSide)) {
+    const s = st.x1 - st.x0;
     // Frames keep the target width (or the whole stretch, when it is narrower) and as many as fit are
     // centred in the stretch, the rest going to the margins. Re-dividing a longer stretch into more,
     // narrower frames would change every piece, and shorter pieces can pack into fewer stock lengths,
     // so a longer wall could cost less; with a fixed width a longer stretch only ever adds frames.
     const fw = Math.min(s, Math.max(t.targetFrameWidth, minSide));
     const n = Math.max(1, Math.floor((s + t.frameGap) / (fw + t.frameGap) + 1e-9));
-    const start = a + (s - (n * fw + (n - 1) * t.frameGap)) / 2;
+    const start = st.x0 + (s - (n * fw + (n - 1) * t.frameGap)) / 2;
     for (let i = 0; i < n; i++) {
-      for (let r = 0; r < rows; r++) {
-        const x = start + i * (fw + t.frameGap);
-        const y = bottom + r * (fh + t.frameGap);
-        ctx.pieces.push({ role: 'frame', x, y, width: fw, height: fh });
-        // Source: docs/sources.md §12 — for a 45° miter the long point equals the frame's outside dimension (common geometry).
-        for (const side of [fw, fw, fh, fh]) {
-          // A side longer than the moulding comes from a longer length the firm lists, or is joined.
-          const cut = stockCutFor(lengths, side, moulding.thickness);
-          addCuts(ctx.reg.lengths, lengthKey(moulding, cut.stockLength), cut.pieces);
-          ctx.joints += cut.joints;
-        }
-        ctx.trimFeet += (2 * (fw + fh)) / 12;
-        ctx.caulkFeet += (4 * (fw + fh)) / 12; // outer and inner edges
-        count += 1;
-        widthSum += fw;
-      }
+      const x = start + i * (fw + t.frameGap);
+      // Under a sill, one frame fills the space below it: rows there would re-divide as the band grew.
+      if (st.underSill) frame(x, bottom, fw, st.top - bottom);
+      else for (let r = 0; r < rows; r++) frame(x, bottom + r * (fh + t.frameGap), fw, fh);
     }
   }
-  return { count, width: count ? widthSum / count : 0, height: count ? fh : 0 };
+  return { count, width: count ? widthSum / count : 0, height: count ? heightSum / count : 0 };
 }
 
 /**
@@ -402,6 +435,30 @@ function backBandAtCasings(ctx: WallContext, openings: PlacedOpening[], t: Treat
   return feet;
 }
 
+/**
+ * Windows on a wall whose stool the new work meets and would stand proud of: their stool and apron are
+ * taken off and refitted (window-stool.ts), with a note. Returns how many, and the painted surface
+ * that comes off with them.
+ */
+function stoolRefitsOnWall(
+  openings: PlacedOpening[],
+  bandBottom: number,
+  bandTop: number,
+  t: Treatment,
+  catalogue: Catalogue,
+  label: string,
+  units: Units,
+  notes: string[],
+): { length: number; paintSqIn: number } {
+  const met = windowsWithStoolInBand(openings, bandBottom, bandTop);
+  if (met.length === 0 || proudOfStool(t, catalogue) <= 0) return { length: 0, paintSqIn: 0 };
+  const out = newFaceThickness(t, catalogue) + catalogue.casing.thickness;
+  notes.push(
+    `On ${label}, the new face with the apron reset on it stands ${formatLength(out, units)} out from the wall, past the ${formatLength(catalogue.stoolProjection, units)} window ${met.length === 1 ? 'stool' : 'stools'}, which should stay ${formatLength(CASING_REVEAL, units)} further out: the stool and apron ${met.length === 1 ? 'of the window are' : `of ${met.length} windows are`} taken off and refitted (extended, re-cut or replaced).`,
+  );
+  return { length: met.length, paintSqIn: met.reduce((sum, o) => sum + stoolAndApronSqIn(o, catalogue), 0) };
+}
+
 function wallTakeoff(
   room: Room,
   wall: Wall,
@@ -410,7 +467,16 @@ function wallTakeoff(
   catalogue: Catalogue,
   reg: CutRegistry,
   units: Units,
-): { wall: WallTakeoff; trimFeet: number; caulkFeet: number; backBandFeet: number; rakeCuts: number; skirtFeet: number } {
+): {
+  wall: WallTakeoff;
+  trimFeet: number;
+  caulkFeet: number;
+  backBandFeet: number;
+  rakeCuts: number;
+  skirtFeet: number;
+  stoolRefits: number;
+  stoolPaintSqIn: number;
+} {
   const length = wallLength(room, wall);
   const baseboard = catalogue.mouldings.find((m) => m.id === catalogue.baseboardId)!;
   const capRail = catalogue.mouldings.find((m) => m.id === catalogue.capRailId)!;
@@ -566,6 +632,7 @@ function wallTakeoff(
   }
   const backBandFeet = backBandAtCasings(ctx, openings, t, label, units, notes);
   if (rake) notes.push(...stairNotes(label, rake.stair, units));
+  const stools = stoolRefitsOnWall(openings, bandBottom, bandTop, t, catalogue, label, units, notes);
   if (boxes.some((b) => b.capRailCrosses)) notes.push(`The cap rail on ${label} would run through an electrical box.`);
   const covered = boxes.filter((b) => b.covered).length;
   // Drawings measure up from the floor at the stair's foot: lift what was laid out in the nosing frame.
@@ -595,7 +662,16 @@ function wallTakeoff(
     baseboardFeet,
     notes,
   };
-  return { wall: out, trimFeet: ctx.trimFeet, caulkFeet: ctx.caulkFeet, backBandFeet, rakeCuts: ctx.rakeCuts, skirtFeet };
+  return {
+    wall: out,
+    trimFeet: ctx.trimFeet,
+    caulkFeet: ctx.caulkFeet,
+    backBandFeet,
+    rakeCuts: ctx.rakeCuts,
+    skirtFeet,
+    stoolRefits: stools.length,
+    stoolPaintSqIn: stools.paintSqIn,
+  };
 }
 
 function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: boolean, units: Units): RoomTakeoff {
@@ -607,6 +683,8 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
   let backBandFeet = 0;
   let rakeCuts = 0;
   let skirtFeet = 0;
+  let stoolRefits = 0;
+  let stoolPaintSqIn = 0;
   const walls = room.walls.map((w, i) => {
     const wt = wallTakeoff(room, w, i, t, catalogue, reg, units);
     trimFeet += wt.trimFeet;
@@ -614,6 +692,8 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     backBandFeet += wt.backBandFeet;
     rakeCuts += wt.rakeCuts;
     skirtFeet += wt.skirtFeet;
+    stoolRefits += wt.stoolRefits;
+    stoolPaintSqIn += wt.stoolPaintSqIn;
     return wt.wall;
   });
   const sum = (f: (w: WallTakeoff) => number): number => walls.reduce((s, w) => s + f(w), 0);
@@ -670,10 +750,11 @@ function roomTakeoff(room: Room, catalogue: Catalogue, reg: CutRegistry, paint: 
     ...(baseboardReset ? { baseboardReset: true } : {}),
     ...(backBandFeet > 0 ? { backBandFeet } : {}),
     ...(skirtFeet > 0 ? { skirtFeet, rakeCuts } : {}),
+    ...(stoolRefits > 0 ? { stoolRefits } : {}),
     // Source: docs/sources.md §5 — 40 CFR 745.83: when painted components are removed, the whole removed area counts.
-    // The old baseboard is taken to be as tall as the new one.
-    // The old skirt board on a stair wall comes off in full too.
-    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width + (skirtFeet > 0 ? skirtFeet * skirtStock(catalogue).width : 0)) / 12,
+    // The old baseboard is taken to be as tall as the new one; the old skirt board on a stair wall comes
+    // off in full too, and refitted stools and aprons count.
+    disturbedPaintSqFt: (baseboardRemovedFeet * baseboard.width + (skirtFeet > 0 ? skirtFeet * skirtStock(catalogue).width : 0)) / 12 + stoolPaintSqIn / 144,
     panelSqFt,
     trimFeet,
     caulkFeet,

@@ -86,6 +86,7 @@ export interface WallTakeoff {
   cutOuts: number;
   returns: number;
   boards?: BoardLayout;
+  /** Picture frames: how many, and their average width and height (frames under a window's sill are shorter). */
   frames?: { count: number; width: number; height: number };
   /** On a stair wall: the nosing line's low and high ends, in wall inches (stair-wall.ts, docs/sources.md §40). */
   rake?: [{ x: number; y: number }, { x: number; y: number }];
@@ -127,6 +128,8 @@ export interface RoomTakeoff {
   /** Stair walls: skirt board along the rake (feet) and ends cut to the stair's angle (stair-takeoff.ts). */
   skirtFeet?: number;
   rakeCuts?: number;
+  /** Windows whose stool and apron are taken off and refitted, the new work standing proud of the stool (docs/sources.md §51). */
+  stoolRefits?: number;
   /** Painted surface disturbed by the work (removed baseboard counts in full), for the lead-safe rule. */
   disturbedPaintSqFt: number;
   /** Area of boards or sheets glued and nailed to the wall (drives adhesive, brads and filler). */
@@ -196,6 +199,7 @@ export interface LabourLine {
     | 'back-band'
     | 'skirt-board'
     | 'rake-cuts'
+    | 'stool-refit'
     | 'paint'
     | 'setup'
     | 'fixture-reset'
