@@ -31,6 +31,11 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
               <dd className="figures font-medium">about {money(group.cents)}</dd>
             </div>
           ))}
+          {/* The lines are rounded so they add up exactly to this figure (present-estimate.ts). */}
+          <div className="flex justify-between px-4 py-2 text-sm font-bold" data-testid="result-middle">
+            <dt>Total, the middle of the range</dt>
+            <dd className="figures">about {money(estimate.middleCents)}</dd>
+          </div>
         </dl>
         {estimate.extras.length > 0 && <p className="mt-2 text-xs text-slate">Extras included: {estimate.extras.join('; ')}.</p>}
       </section>

@@ -18,6 +18,11 @@ export type HomeownerEstimate = {
   /** Why the range is as wide as it is, in plain words. */
   rangeReason: string;
   minimumApplied: boolean;
+  /**
+   * The middle of the range (the job's own price, or the firm's minimum when that is more), rounded to
+   * the range's step; the groups below are rounded to the same step and add up to it exactly.
+   */
+  middleCents: number;
   /** How the middle of the range adds up. */
   groups: { id: 'materials' | 'labour' | 'extras' | 'tax' | 'minimum'; label: string; cents: number }[];
   extras: string[];

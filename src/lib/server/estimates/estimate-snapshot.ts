@@ -202,6 +202,7 @@ const price = z.object({
   lowCents: num,
   highCents: num,
   spread: z.object({ below: num, above: num, basis: str }),
+  roundingCents: num.optional(),
   rangeText: str,
 });
 

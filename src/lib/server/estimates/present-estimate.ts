@@ -1,3 +1,4 @@
+import { apportionToStep } from '~/lib/estimate/money';
 import { describePacks, type Estimate, type WallPiece, type WallTakeoff } from '~/lib/estimate';
 import type { HomeownerEstimate, HomeownerWall } from '~/lib/shared/homeowner-estimate';
 
@@ -53,7 +54,7 @@ function wallsForDrawing(rooms: Estimate['takeoff']['rooms'], budget: number): H
 export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_PIECES_BUDGET): HomeownerEstimate {
   const { takeoff, price } = result;
   const walls = wallsForDrawing(takeoff.rooms, drawnPiecesBudget);
-  const groups: HomeownerEstimate['groups'] = [
+  const raw: HomeownerEstimate['groups'] = [
     { id: 'materials', label: 'Materials and supplies', cents: price.materialsCents + price.markupCents },
     { id: 'labour', label: `Installation${takeoff.facts.paint ? ' and painting' : ''}`, cents: price.labourCents },
     { id: 'extras', label: 'Set-up and extras', cents: price.extrasCents },
@@ -61,6 +62,7 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
     // Under the firm's minimum the difference is its own line, so the groups add up to the middle of the range.
     { id: 'minimum', label: 'Minimum job', cents: price.totalCents - price.subtotalCents },
   ];
+  const { groups, middleCents } = roundedGroups(raw, price.roundingCents ?? OLD_SNAPSHOT_STEP_CENTS);
   return {
     units: takeoff.units,
     currency: price.currency,
@@ -68,7 +70,8 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
     range: { lowCents: price.lowCents, highCents: price.highCents, text: price.rangeText },
     rangeReason: rangeReason(takeoff.facts.measuredBy, takeoff.facts.photoCount > 0),
     minimumApplied: price.minimumApplied,
-    groups: groups.filter((g) => g.cents > 0),
+    middleCents,
+    groups,
     extras: price.lines.filter((l) => l.group === 'extras').map((l) => l.label),
     rooms: takeoff.rooms.map((room, r) => ({
       name: room.name,
@@ -86,6 +89,22 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
     cautions: takeoff.cautions,
     notes: takeoff.notes,
   };
+}
+
+/** Snapshots stored before the price kept its rounding step are shown to the whole currency unit. */
+const OLD_SNAPSHOT_STEP_CENTS = 100;
+
+/**
+ * The groups rounded the way the range is rounded, adding up exactly to the rounded middle
+ * (largest remainder, docs/sources.md §51). A group that rounds to nothing is left out rather than
+ * shown as "about $0"; its share is carried by the others.
+ */
+function roundedGroups(raw: HomeownerEstimate['groups'], step: number): { groups: HomeownerEstimate['groups']; middleCents: number } {
+  const { parts, totalCents } = apportionToStep(
+    raw.map((g) => g.cents),
+    step,
+  );
+  return { groups: raw.map((g, i) => ({ ...g, cents: parts[i]! })).filter((g) => g.cents > 0), middleCents: totalCents };
 }
 
 function rangeReason(measuredBy: string, photos: boolean): string {
