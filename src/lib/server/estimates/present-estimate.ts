@@ -1,6 +1,7 @@
 import { apportionToStep } from '~/lib/estimate/money';
 import { describePacks, type Estimate, type WallPiece, type WallTakeoff } from '~/lib/estimate';
 import type { HomeownerEstimate, HomeownerWall } from '~/lib/shared/homeowner-estimate';
+import { rangeReason } from './range-reason';
 
 export type { HomeownerEstimate };
 
@@ -68,7 +69,7 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
     currency: price.currency,
     locale: price.locale,
     range: { lowCents: price.lowCents, highCents: price.highCents, text: price.rangeText },
-    rangeReason: rangeReason(takeoff.facts.measuredBy, takeoff.facts.photoCount > 0),
+    rangeReason: rangeReason(takeoff.facts.measuredBy, takeoff.facts.photoCount, price.spread),
     minimumApplied: price.minimumApplied,
     middleCents,
     groups,
@@ -105,16 +106,4 @@ function roundedGroups(raw: HomeownerEstimate['groups'], step: number): { groups
     step,
   );
   return { groups: raw.map((g, i) => ({ ...g, cents: parts[i]! })).filter((g) => g.cents > 0), middleCents: totalCents };
-}
-
-function rangeReason(measuredBy: string, photos: boolean): string {
-  const how =
-    measuredBy === 'site-measure'
-      ? 'The walls were measured on site'
-      : measuredBy === 'homeowner-tape'
-        ? 'You measured with a tape'
-        : 'These are your estimates of the sizes';
-  return `${how}${photos ? ' and sent photos' : ' without photos'}, so the range is ${
-    measuredBy === 'site-measure' && photos ? 'narrow' : photos || measuredBy === 'homeowner-tape' ? 'moderate' : 'wide'
-  }. The final price follows a site visit.`;
 }
