@@ -1,6 +1,6 @@
 import { apportionToStep } from '~/lib/estimate/money';
 import { describePacks, type Estimate, type WallPiece, type WallTakeoff } from '~/lib/estimate';
-import type { HomeownerEstimate, HomeownerWall } from '~/lib/shared/homeowner-estimate';
+import type { DrawnPiece, HomeownerEstimate, HomeownerWall } from '~/lib/shared/homeowner-estimate';
 import { rangeReason } from './range-reason';
 
 export type { HomeownerEstimate };
@@ -16,11 +16,12 @@ const r3 = (x: number): number => Math.round(x * 1000) / 1000;
 
 /**
  * The pieces a drawing needs: boards and strips butted end to end in one course are drawn without
- * an outline (WallDrawing), so they become one rectangle; coordinates to a thousandth of an inch,
- * the precision the drawing uses.
+ * an outline (WallDrawing), so they become one rectangle that keeps where they met (`joints`, drawn
+ * as lines, staggered as the takeoff staggers them); coordinates to a thousandth of an inch, the
+ * precision the drawing uses.
  */
-export function drawingPieces(pieces: WallPiece[]): WallPiece[] {
-  const out: WallPiece[] = [];
+export function drawingPieces(pieces: WallPiece[]): DrawnPiece[] {
+  const out: DrawnPiece[] = [];
   for (const p of pieces) {
     const last = out.at(-1);
     const butted =
@@ -31,21 +32,25 @@ export function drawingPieces(pieces: WallPiece[]): WallPiece[] {
       Math.abs(last.y - p.y) < 1e-6 &&
       Math.abs(last.height - p.height) < 1e-6 &&
       Math.abs(last.x + last.width - p.x) < 1e-6;
-    if (butted) last.width = r3(last.width + p.width);
-    else out.push({ ...p, x: r3(p.x), y: r3(p.y), width: r3(p.width), height: r3(p.height), ...(p.ripped ? { ripped: true } : {}) });
+    if (butted) {
+      (last.joints ??= []).push(r3(p.x));
+      last.width = r3(last.width + p.width);
+    } else out.push({ ...p, x: r3(p.x), y: r3(p.y), width: r3(p.width), height: r3(p.height), ...(p.ripped ? { ripped: true } : {}) });
   }
   for (const p of out) if (!p.ripped) delete p.ripped;
   return out;
 }
 
-/** Each wall with its drawing while the budget lasts; the rest with no pieces and `drawn: false`. */
+/** Each wall with its drawing while the budget (pieces and joints) lasts; the rest with no pieces and `drawn: false`. */
 function wallsForDrawing(rooms: Estimate['takeoff']['rooms'], budget: number): HomeownerWall[][] {
   let left = budget;
   return rooms.map((room) =>
     room.walls.map((wall: WallTakeoff): HomeownerWall => {
       const pieces = drawingPieces(wall.pieces);
-      const drawn = pieces.length <= left;
-      if (drawn) left -= pieces.length;
+      // A kept joint costs about as much JSON as a piece, so it counts against the budget as one.
+      const cost = pieces.reduce((n, p) => n + 1 + (p.joints?.length ?? 0), 0);
+      const drawn = cost <= left;
+      if (drawn) left -= cost;
       return { ...wall, pieces: drawn ? pieces : [], drawn };
     }),
   );
@@ -77,6 +82,7 @@ export function presentForHomeowner(result: Estimate, drawnPiecesBudget = DRAWN_
     rooms: takeoff.rooms.map((room, r) => ({
       name: room.name,
       treatmentName: room.treatmentName,
+      treatmentKind: room.treatmentKind,
       height: room.height,
       netSqFt: room.netSqFt,
       walls: walls[r]!,
