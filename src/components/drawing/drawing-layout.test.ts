@@ -21,9 +21,10 @@ describe('one scale for every wall of a room', () => {
     expect(frame.font / frame.width).toBeCloseTo(LABEL_SHARE, 9);
   });
 
-  it('keeps labels at least 11 px on screen in a 240 px frame (a 320 px phone less the page’s padding)', () => {
-    // Source: the readability target (11 px at 320 px); 320 px less 2 × 40 px of widget and card padding, computed here.
-    expect(LABEL_SHARE * 240).toBeGreaterThanOrEqual(11);
+  it('keeps labels at least 11 px on screen in a 220 px frame (a 320 px phone less the widget’s padding)', () => {
+    // Source: the readability target (11 px at 320 px); the widget leaves about 230 px there
+    // (measured in tests/e2e/wall-drawing-scale.spec.ts), so 220 px keeps a margin.
+    expect(LABEL_SHARE * 220).toBeGreaterThanOrEqual(11);
     // And no more than about 20 px on a desktop, where the frame stops growing.
     expect(LABEL_SHARE * MAX_FRAME_PX).toBeLessThanOrEqual(20);
   });

@@ -6,13 +6,13 @@
 
 /**
  * Label font size as a share of the room's frame width. Every wall of a room is drawn as a share of
- * the same frame, so its labels come out the same size on screen: 0.047 × 240 px ≈ 11.3 px when
- * the frame is 240 px wide, about what a 320 px phone leaves after the widget's padding.
+ * the same frame, so its labels come out the same size on screen: 0.052 × 220 px ≈ 11.4 px. The
+ * widget leaves a frame of about 230 px on a 320 px phone (measured by tests/e2e/wall-drawing-scale.spec.ts).
  */
-export const LABEL_SHARE = 0.047;
+export const LABEL_SHARE = 0.052;
 
 /** The frame stops growing at this width on wide screens, so labels stay under 20 px there. */
-export const MAX_FRAME_PX = 420;
+export const MAX_FRAME_PX = 380;
 
 /** Space between the wall and its dimension line, and between that line and its label, in ems. */
 const DIMENSION_GAP_EMS = 1.2;
