@@ -7,7 +7,7 @@
 import { useId } from 'react';
 // Direct module imports keep the browser bundle free of the core's schemas (and zod).
 import type { TreatmentKind } from '~/lib/estimate/schemas.ts';
-import type { WallTakeoff } from '~/lib/estimate/types.ts';
+import type { WallPiece, WallTakeoff } from '~/lib/estimate/types.ts';
 import type { DrawnPiece } from '~/lib/shared/homeowner-estimate.ts';
 import { wallSummary } from '~/lib/estimate/summary.ts';
 import { formatLength, type Units } from '~/lib/estimate/units.ts';

@@ -17,6 +17,8 @@ export const MAX_FRAME_PX = 380;
 /** Space between the wall and its dimension line, and between that line and its label, in ems. */
 const DIMENSION_GAP_EMS = 1.2;
 const LABEL_GAP_EMS = 0.5;
+/** White space outside a side label, so a face a little wider than estimated is not clipped. */
+const EDGE_EMS = 0.4;
 /** Above the wall: a one-line note such as the ripped last board. */
 const TOP_EMS = 1.5;
 /** Below the wall: the length's dimension line and its label. */
@@ -57,7 +59,7 @@ export interface RoomFrame {
 /** The frame shared by every wall of one room, sized for its longest wall and its widest labels. */
 export function roomFrame(walls: readonly WallToFrame[]): RoomFrame {
   const longest = Math.max(...walls.map((w) => w.length));
-  const side = (label: string | undefined): number => (label ? DIMENSION_GAP_EMS + LABEL_GAP_EMS + labelEms(label) : DIMENSION_GAP_EMS);
+  const side = (label: string | undefined): number => (label ? DIMENSION_GAP_EMS + LABEL_GAP_EMS + labelEms(label) + EDGE_EMS : DIMENSION_GAP_EMS + EDGE_EMS);
   const leftEms = Math.max(...walls.map((w) => side(w.leftLabel)));
   const rightEms = Math.max(...walls.map((w) => side(w.rightLabel)));
   // width = longest + (leftEms + rightEms) × font, with font = LABEL_SHARE × width.
