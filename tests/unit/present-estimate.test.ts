@@ -41,9 +41,10 @@ describe("the homeowner's view is sized to what the widget shows", () => {
       { role: 'batten', x: 0, y: 35.25, width: 2.5, height: 30 },
     ];
     expect(drawingPieces(pieces)).toEqual([
-      { role: 'board', x: 0, y: 5.25, width: 120, height: 5.125 },
+      // The butt joint between merged boards is kept, so the drawing can show it.
+      { role: 'board', x: 0, y: 5.25, width: 120, height: 5.125, joints: [96] },
       { role: 'board', x: 150, y: 5.25, width: 30, height: 5.125 },
-      { role: 'board', x: 0, y: 10.5, width: 180, height: 2.1, ripped: true },
+      { role: 'board', x: 0, y: 10.5, width: 180, height: 2.1, ripped: true, joints: [96] },
       // Battens are outlined in the drawing, so their joints show and stay.
       { role: 'batten', x: 0, y: 5.25, width: 2.5, height: 30 },
       { role: 'batten', x: 0, y: 35.25, width: 2.5, height: 30 },
@@ -58,9 +59,29 @@ describe("the homeowner's view is sized to what the widget shows", () => {
     const boardsBefore = wall.pieces.filter((p) => p.role === 'board').length;
     const boardsAfter = shown.pieces.filter((p) => p.role === 'board').length;
     expect(boardsAfter).toBeLessThan(boardsBefore);
-    // Everything but the board rectangles is drawn alike.
-    const strip = (html: string) => html.replace(/<rect data-role="board"[^>]*><\/rect>/g, '');
+    // Everything but the board rectangles and the joint lines is drawn alike.
+    const strip = (html: string) => html.replace(/<rect data-role="board"[^>]*><\/rect>/g, '').replace(/<line data-part="joint"[^>]*><\/line>/g, '');
     expect(strip(svg(shown))).toBe(strip(svg(wall)));
+    // And every butt joint of the takeoff is drawn: one line per board that does not start a row or follow a gap.
+    const joints = shown.pieces.reduce((n, p) => n + (p.joints?.length ?? 0), 0);
+    expect(joints).toBe(boardsBefore - boardsAfter);
+    expect(svg(shown).match(/data-part="joint"/g)?.length ?? 0).toBe(joints);
+  });
+
+  it('staggers the joints of horizontal boards from row to row, as the takeoff lays them', () => {
+    // Source: docs/sources.md §45 worked example: a 14 ft (168 in) wall in 8 ft boards, studs 16 in on centre
+    // from the left end: row 1 joins at 96 in, row 2 at 80 in, row 3 as row 1.
+    const e = run({
+      rooms: [{ name: 'Den', ceilingHeight: 96, walls: [{ length: 168 }], treatment: { id: 'shiplap-horizontal', height: 'wainscot', wainscotHeight: 40 } }],
+      builtBefore1978: 'no',
+      measuredBy: 'homeowner-tape',
+    });
+    const rows = presentForHomeowner(e)
+      .rooms[0]!.walls[0]!.pieces.filter((p) => p.role === 'board' && p.width > 100)
+      .sort((a, b) => a.y - b.y)
+      .map((p) => p.joints);
+    expect(rows.length).toBeGreaterThanOrEqual(3);
+    expect(rows.slice(0, 3)).toEqual([[96], [80], [96]]);
   });
 
   it('keeps a huge project’s answer to a few hundred KB: drawings while the budget lasts, then walls in words', () => {

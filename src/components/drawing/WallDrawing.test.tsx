@@ -1,7 +1,7 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { estimate, parseRateBook, sampleProject, sampleRateBook } from '~/lib/estimate/index.ts';
-import { WallDrawing } from './WallDrawing.tsx';
+import { roomFrameFor, WallDrawing } from './WallDrawing.tsx';
 
 const rateBook = parseRateBook(sampleRateBook());
 const e = estimate(sampleProject(), rateBook);
@@ -79,5 +79,62 @@ describe('WallDrawing fixtures', () => {
     const lift = base.bandBottom;
     expect(html).toContain(`data-role="band-bottom" points="0,${200 - lift} 126,${110 - lift} 150,${110 - lift}"`);
     expect(renderToStaticMarkup(<WallDrawing wall={base} units="imperial" />)).not.toContain('nosing-line');
+  });
+});
+
+describe('WallDrawing measures what the homeowner typed', () => {
+  const bathroom = (fixtures: { kind: 'tub' | 'toilet' | 'vanity'; offset: number }[] = []) =>
+    estimate(
+      {
+        rooms: [
+          {
+            name: 'Bathroom',
+            ceilingHeight: 96,
+            length: 96,
+            width: 60,
+            walls: [{ side: 'length', fixtures }, { side: 'width' }],
+            treatment: { id: 'beadboard', height: 'wainscot', wainscotHeight: 40 },
+          },
+        ],
+        builtBefore1978: 'no',
+        measuredBy: 'homeowner-tape',
+      },
+      rateBook,
+    ).takeoff.rooms[0]!;
+
+  it('dimensions the wainscot from the floor to its top, as typed (40 in = 3\' 4")', () => {
+    // Source: computed here, 40 in = 3 ft 4 in; the baseboard's 5-1/4 in is not taken off the typed height.
+    const html = renderToStaticMarkup(<WallDrawing wall={bathroom().walls[0]!} units="imperial" />);
+    expect(html).toContain('>3&#x27; 4&quot;</text>');
+    expect(html).not.toContain('>2&#x27; 10-3/4&quot;</text>');
+  });
+
+  it('draws one scale for the room: the 5 ft wall’s drawing is narrower than the 8 ft wall’s', () => {
+    const room = bathroom();
+    const frame = roomFrameFor(room.walls, 'imperial');
+    const widths = room.walls.map((w) =>
+      Number(/<svg[^>]* width="([\d.]+)%"/.exec(renderToStaticMarkup(<WallDrawing wall={w} units="imperial" frame={frame} />))![1]),
+    );
+    expect(widths[0]).toBe(100);
+    expect(widths[1]).toBeLessThan(100);
+  });
+
+  it('draws beadboard with beads, and no beads on other treatments', () => {
+    const wall = bathroom().walls[0]!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" treatmentKind="beadboard" />);
+    // Beads every 2 in inside a 96 in wall: 2 … 94 in is 47, less the sheet seam at 48 in: 46 lines (computed here).
+    expect(html.match(/data-part="bead"/g)).toHaveLength(46);
+    expect(renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" treatmentKind="board-and-batten" />)).not.toContain('data-part="bead"');
+  });
+
+  it('outlines a tub with its rim and a toilet with its tank, where they stand', () => {
+    const wall = bathroom([
+      { kind: 'tub', offset: 0 },
+      { kind: 'toilet', offset: 70 },
+    ]).walls[0]!;
+    const tub = wall.fixtures!.find((f) => f.kind === 'tub')!;
+    const html = renderToStaticMarkup(<WallDrawing wall={wall} units="imperial" />);
+    expect(html).toMatch(new RegExp(`<g data-kind="tub" data-placement="${tub.placement}"><rect x="0" y="${96 - tub.height}" width="${tub.width}"`));
+    expect(html).toMatch(/<g data-kind="toilet"[^>]*><rect[^>]*><\/rect><rect[^>]*><\/rect><path/);
   });
 });

@@ -6,17 +6,33 @@
  */
 import { useId } from 'react';
 // Direct module imports keep the browser bundle free of the core's schemas (and zod).
+import type { TreatmentKind } from '~/lib/estimate/schemas.ts';
 import type { WallPiece, WallTakeoff } from '~/lib/estimate/types.ts';
+import type { DrawnPiece } from '~/lib/shared/homeowner-estimate.ts';
 import { wallSummary } from '~/lib/estimate/summary.ts';
 import { formatLength, type Units } from '~/lib/estimate/units.ts';
+import { beadLines, MAX_FRAME_PX, roomFrame, wallFrame, wallToFrame, type RoomFrame } from './drawing-layout.ts';
+import { FixtureOutline } from './FixtureOutline.tsx';
 
 export interface WallDrawingProps {
-  wall: WallTakeoff;
+  wall: Omit<WallTakeoff, 'pieces'> & { pieces: DrawnPiece[] };
   units: Units;
   /** Shown in the text alternative, e.g. "Vertical shiplap". */
   treatmentName?: string;
+  /** Beadboard panels are drawn with their beads. */
+  treatmentKind?: TreatmentKind;
+  /** The frame shared by every wall of the room (roomFrameFor), so they are drawn to one scale; the wall's own when left out. */
+  frame?: RoomFrame;
   className?: string;
 }
+
+/** The shared frame for a room's walls, so a 5 ft wall is drawn shorter than an 8 ft one beside it. */
+export function roomFrameFor(walls: readonly Pick<WallTakeoff, 'length' | 'ceilingHeight' | 'bandTop' | 'bandBottom' | 'rake'>[], units: Units): RoomFrame {
+  return roomFrame(walls.map((w) => wallToFrame(w, (x) => formatLength(x, units))));
+}
+
+/** Beadboard beads are drawn about this far apart (drawing only, not priced): from memory. */
+const BEAD_SPACING = 2;
 
 const INK = '#1F2A2E';
 const PAPER = '#FFFFFF';
@@ -39,23 +55,20 @@ const FILL: Record<WallPiece['role'], string> = {
 
 const r = (x: number): number => Math.round(x * 1000) / 1000;
 
-export function WallDrawing({ wall, units, treatmentName, className }: WallDrawingProps) {
+export function WallDrawing({ wall, units, treatmentName, treatmentKind, frame: sharedFrame, className }: WallDrawingProps) {
   const id = useId();
   const titleId = `${id}-title`;
   const descId = `${id}-desc`;
   const L = wall.length;
   const H = wall.ceilingHeight;
-  // Text and margins scale with the wall so labels keep the same size relative to the drawing.
-  const font = Math.max(L, H) * 0.032;
-  // Room for the dimension labels: feet-and-inches text is up to about seven characters.
-  const margin = font * 5.6;
-  const marginRight = font * 6.2;
-  const vbX = -margin;
-  const vbY = -font * 1.5;
-  const vbW = L + margin + marginRight;
-  const vbH = H + font * 1.5 + margin;
-  const y = (fromFloor: number): number => r(H - fromFloor);
   const len = (x: number): string => formatLength(x, units);
+  const sides = wallToFrame(wall, len);
+  // Text and margins come from the room's frame, so every wall of a room has one scale and one label size.
+  const frame = sharedFrame ?? roomFrame([sides]);
+  const { viewBox, widthShare } = wallFrame(sides, frame);
+  const font = frame.font;
+  const y = (fromFloor: number): number => r(H - fromFloor);
+  const beads = treatmentKind === 'beadboard';
   const shiplap = wall.boards !== undefined;
   const tick = font * 0.45;
 
@@ -94,10 +107,16 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
       className={className}
       role="img"
       aria-labelledby={`${titleId} ${descId}`}
-      viewBox={`${r(vbX)} ${r(vbY)} ${r(vbW)} ${r(vbH)}`}
-      width="100%"
+      viewBox={`${r(viewBox.x)} ${r(viewBox.y)} ${r(viewBox.w)} ${r(viewBox.h)}`}
+      width={`${r(widthShare * 100)}%`}
       preserveAspectRatio="xMidYMid meet"
-      style={{ fontFamily: "'DM Sans', system-ui, sans-serif", fontVariantNumeric: 'tabular-nums', maxWidth: '100%', height: 'auto' }}
+      style={{
+        fontFamily: "'DM Sans', system-ui, sans-serif",
+        fontVariantNumeric: 'tabular-nums',
+        maxWidth: `${r(widthShare * MAX_FRAME_PX)}px`,
+        height: 'auto',
+      }}
+      data-scale={r(frame.width)}
       data-wall={wall.label}
     >
       <title id={titleId}>{`${wall.label}, drawn to scale`}</title>
@@ -125,6 +144,48 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
           />
         ))}
       </g>
+
+      {/* Butt joints where merged boards meet, each on a stud and staggered from the row below (staggered-joints.ts). */}
+      <g className="joints">
+        {wall.pieces.flatMap((p, i) =>
+          (p.joints ?? []).map((jx, j) => (
+            <line
+              key={`${i}-${j}`}
+              data-part="joint"
+              x1={r(jx)}
+              y1={y(p.y + p.height)}
+              x2={r(jx)}
+              y2={y(p.y)}
+              stroke={GAP}
+              strokeWidth={1}
+              vectorEffect="non-scaling-stroke"
+            />
+          )),
+        )}
+      </g>
+
+      {/* Beadboard's beads: thin lines down each panel at the bead spacing. */}
+      {beads && (
+        <g className="beads">
+          {wall.pieces
+            .filter((p) => p.role === 'panel')
+            .flatMap((p, i) =>
+              beadLines(p, BEAD_SPACING).map((bx) => (
+                <line
+                  key={`${i}-${bx}`}
+                  data-part="bead"
+                  x1={bx}
+                  y1={y(p.y + p.height)}
+                  x2={bx}
+                  y2={y(p.y)}
+                  stroke={WOOD_TRIM}
+                  strokeWidth={1}
+                  vectorEffect="non-scaling-stroke"
+                />
+              )),
+            )}
+        </g>
+      )}
 
       {/* Casings around doors and windows: the treatment stops at their outside edge. */}
       <g className="casings">
@@ -170,26 +231,11 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
         ))}
       </g>
 
-      {/* Fixtures as a labelled outline: the treatment stops at some and runs behind others. */}
+      {/* Fixtures as outlines at their place: the treatment stops at some and runs behind others. */}
       {wall.fixtures && wall.fixtures.length > 0 && (
         <g className="fixtures">
           {wall.fixtures.map((f, i) => (
-            <g key={i} data-kind={f.kind} data-placement={f.placement}>
-              <rect
-                x={r(f.offset)}
-                y={y(f.height)}
-                width={r(f.width)}
-                height={r(f.height)}
-                fill="none"
-                stroke={SLATE}
-                strokeWidth={1}
-                strokeDasharray="2 2"
-                vectorEffect="non-scaling-stroke"
-              />
-              <text x={r(f.offset + f.width / 2)} y={r(y(f.height / 2))} fontSize={r(font * 0.8)} textAnchor="middle" fill={SLATE}>
-                {f.kind}
-              </text>
-            </g>
+            <FixtureOutline key={i} fixture={f} top={y(f.height)} font={font} />
           ))}
         </g>
       )}
@@ -216,12 +262,16 @@ export function WallDrawing({ wall, units, treatmentName, className }: WallDrawi
       {/* On a stair wall: the nosing line, and the band's bottom edge following it, level past the stair. */}
       {wall.rake && <RakeLines rake={wall.rake} length={L} bandBottom={wall.bandBottom} y={y} />}
 
-      {/* Dimensions: length below, ceiling height on the left, covered band on the right. */}
+      {/* Dimensions as the homeowner typed them: length below, ceiling height on the left, and on the right
+          the top of a wainscot from the floor (on a stair wall, the band's height above the nosing line). */}
       {hDim(0, L, H + font * 1.2, len(L), 'length')}
-      {vDim(0, H, -font * 1.2, len(H), 'ceiling', 'end')}
-      {vDim(wall.bandBottom, wall.bandTop, L + font * 1.2, len(wall.bandTop - wall.bandBottom), 'band', 'start')}
+      {vDim(0, H, -font * 1.2, sides.leftLabel, 'ceiling', 'end')}
+      {sides.rightLabel !== undefined &&
+        (wall.rake
+          ? vDim(wall.bandBottom, wall.bandTop, L + font * 1.2, sides.rightLabel, 'band', 'start')
+          : vDim(0, wall.bandTop, L + font * 1.2, sides.rightLabel, 'band', 'start'))}
       {rippedPiece && wall.boards?.orientation === 'vertical' && (
-        <text className="ripped" x={r(rippedPiece.x + rippedPiece.width / 2)} y={r(-font * 0.4)} fontSize={r(font * 0.85)} textAnchor="middle" fill={SLATE}>
+        <text className="ripped" x={r(rippedPiece.x + rippedPiece.width / 2)} y={r(-font * 0.4)} fontSize={r(font)} textAnchor="middle" fill={SLATE}>
           {`last ${len(rippedPiece.width)}`}
         </text>
       )}

@@ -1,4 +1,4 @@
-import { WallDrawing } from '~/components/drawing/WallDrawing';
+import { roomFrameFor, WallDrawing } from '~/components/drawing/WallDrawing';
 import { formatMoney } from '~/lib/estimate/money.ts';
 import { wallSummary } from '~/lib/estimate/summary.ts';
 import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
@@ -31,6 +31,11 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
               <dd className="figures font-medium">about {money(group.cents)}</dd>
             </div>
           ))}
+          {/* The lines are rounded so they add up exactly to this figure (present-estimate.ts). */}
+          <div className="flex justify-between px-4 py-2 text-sm font-bold" data-testid="result-middle">
+            <dt>Total, the middle of the range</dt>
+            <dd className="figures">about {money(estimate.middleCents)}</dd>
+          </div>
         </dl>
         {estimate.extras.length > 0 && <p className="mt-2 text-xs text-slate">Extras included: {estimate.extras.join('; ')}.</p>}
       </section>
@@ -39,30 +44,34 @@ export function ResultView({ estimate, firmName, updating }: { estimate: Homeown
         <h3 id="walls-heading" className="font-bold">
           Your walls
         </h3>
-        {estimate.rooms.map((room, r) => (
-          <div key={r} className="mt-3">
-            <h4 className="text-sm font-medium">
-              {room.name}: {room.treatmentName}, {room.height === 'full' ? 'full height' : 'wainscot height'}, about{' '}
-              <span className="figures">{Math.round(room.netSqFt)}</span> sq ft
-            </h4>
-            {/* One wall per row, so dimension labels stay readable at phone and iframe widths. */}
-            <div className="mt-2 grid gap-3">
-              {room.walls.map((wall, i) =>
-                wall.drawn === false ? (
-                  // Past the answer's drawing budget (a very big project): the wall in words.
-                  <p key={i} className="rounded-md border border-slate/20 bg-white p-2 text-sm" data-testid="wall-in-words">
-                    {wallSummary(wall, estimate.units, room.treatmentName)}
-                  </p>
-                ) : (
-                  <figure key={i} className="rounded-md border border-slate/20 bg-white p-2">
-                    <WallDrawing wall={wall} units={estimate.units} treatmentName={room.treatmentName} />
-                    <figcaption className="mt-1 text-xs text-slate">{wall.label}</figcaption>
-                  </figure>
-                ),
-              )}
+        {estimate.rooms.map((room, r) => {
+          // One scale for the room's walls, so a short wall is drawn shorter than a long one beside it.
+          const frame = roomFrameFor(room.walls, estimate.units);
+          return (
+            <div key={r} className="mt-3">
+              <h4 className="text-sm font-medium">
+                {room.name}: {room.treatmentName}, {room.height === 'full' ? 'full height' : 'wainscot height'}, about{' '}
+                <span className="figures">{Math.round(room.netSqFt)}</span> sq ft
+              </h4>
+              {/* One wall per row, so dimension labels stay readable at phone and iframe widths. */}
+              <div className="mt-2 grid gap-3">
+                {room.walls.map((wall, i) =>
+                  wall.drawn === false ? (
+                    // Past the answer's drawing budget (a very big project): the wall in words.
+                    <p key={i} className="rounded-md border border-slate/20 bg-white p-2 text-sm" data-testid="wall-in-words">
+                      {wallSummary(wall, estimate.units, room.treatmentName)}
+                    </p>
+                  ) : (
+                    <figure key={i} className="rounded-md border border-slate/20 bg-white p-2" data-testid="result-wall">
+                      <WallDrawing wall={wall} units={estimate.units} treatmentName={room.treatmentName} treatmentKind={room.treatmentKind} frame={frame} />
+                      <figcaption className="mt-1 text-xs text-slate">{wall.label}</figcaption>
+                    </figure>
+                  ),
+                )}
+              </div>
             </div>
-          </div>
-        ))}
+          );
+        })}
         {estimate.rooms.some((room) => room.walls.some((wall) => wall.drawn === false)) && (
           <p className="mt-2 text-xs text-slate">Some walls are described in words rather than drawn, to keep this page quick for a project this size.</p>
         )}

@@ -25,3 +25,23 @@ const formatters = new Map<string, Intl.NumberFormat>();
 export const roundDownTo = (cents: number, step: number): number => Math.floor(cents / step) * step;
 /** Rounds up to a multiple of `step` cents. */
 export const roundUpTo = (cents: number, step: number): number => Math.ceil(cents / step) * step;
+
+/**
+ * Rounds parts to multiples of `step` so that they add up exactly to their sum rounded to the nearest
+ * step (half up): each part is rounded down, and the steps left over go one each to the parts with the
+ * largest remainders, the earlier part first on a tie (the largest-remainder method, docs/sources.md §53).
+ * Rounding each part on its own would let "about" figures disagree with the total they explain.
+ */
+export function apportionToStep(partsCents: readonly number[], step: number): { parts: number[]; totalCents: number } {
+  const sum = partsCents.reduce((s, c) => s + c, 0);
+  const totalCents = Math.round(sum / step) * step;
+  const parts = partsCents.map((c) => Math.floor(c / step) * step);
+  let spare = Math.round((totalCents - parts.reduce((s, c) => s + c, 0)) / step);
+  const byRemainder = partsCents.map((c, i) => ({ i, rest: c - parts[i]! })).sort((a, b) => b.rest - a.rest || a.i - b.i);
+  for (const { i } of byRemainder) {
+    if (spare <= 0) break;
+    parts[i]! += step;
+    spare -= 1;
+  }
+  return { parts, totalCents };
+}

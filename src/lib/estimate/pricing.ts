@@ -150,6 +150,7 @@ export function priceRange(takeoff: Takeoff, rateBook: RateBook): Price {
       above: spread.above,
       basis: `measured from ${method}, ${photos ? 'with photos' : 'without photos'}: ${pct(spread.below)} below to ${pct(spread.above)} above ${money(subtotalCents)}, rounded to ${money(step)}${minimumApplied ? `, and neither end below the minimum job of ${money(rateBook.minimumJobCents)}` : ''}`,
     },
+    roundingCents: step,
     rangeText: lowCents === highCents ? fmtRange(lowCents) : `${fmtRange(lowCents)} – ${fmtRange(highCents)}`,
   };
 }

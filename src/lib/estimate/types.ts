@@ -249,6 +249,8 @@ export interface Price {
   lowCents: number;
   highCents: number;
   spread: { below: number; above: number; basis: string };
+  /** The rate book's rounding step for the range; the homeowner's breakdown is rounded to it too. Absent in older snapshots. */
+  roundingCents?: number;
   /** The range as people read it, e.g. "$4,350 – $5,900". */
   rangeText: string;
 }

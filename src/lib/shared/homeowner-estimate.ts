@@ -1,10 +1,13 @@
-import type { Caution, WallTakeoff } from '~/lib/estimate/index.ts';
+import type { Caution, TreatmentKind, WallPiece, WallTakeoff } from '~/lib/estimate/index.ts';
+
+/** A piece as drawn: boards butted end to end in a course come merged, with the x of each butt joint kept. */
+export type DrawnPiece = WallPiece & { joints?: number[] };
 
 /**
  * A wall as the homeowner's view carries it: its takeoff with the pieces its drawing needs, or,
  * past the answer's drawing budget, none (`drawn: false`: the wall is described in words instead).
  */
-export type HomeownerWall = WallTakeoff & { drawn: boolean };
+export type HomeownerWall = Omit<WallTakeoff, 'pieces'> & { pieces: DrawnPiece[]; drawn: boolean };
 
 /**
  * What a homeowner sees of an estimate. The firm's unit rates (price per sheet, labour rate, markup)
@@ -18,10 +21,15 @@ export type HomeownerEstimate = {
   /** Why the range is as wide as it is, in plain words. */
   rangeReason: string;
   minimumApplied: boolean;
+  /**
+   * The middle of the range (the job's own price, or the firm's minimum when that is more), rounded to
+   * the range's step; the groups below are rounded to the same step and add up to it exactly.
+   */
+  middleCents: number;
   /** How the middle of the range adds up. */
   groups: { id: 'materials' | 'labour' | 'extras' | 'tax' | 'minimum'; label: string; cents: number }[];
   extras: string[];
-  rooms: { name: string; treatmentName: string; height: 'wainscot' | 'full'; netSqFt: number; walls: HomeownerWall[] }[];
+  rooms: { name: string; treatmentName: string; treatmentKind: TreatmentKind; height: 'wainscot' | 'full'; netSqFt: number; walls: HomeownerWall[] }[];
   materials: { label: string; quantity: number; unit: string }[];
   cautions: Caution[];
   notes: string[];

@@ -210,6 +210,7 @@ const price = z.object({
   lowCents: num,
   highCents: num,
   spread: z.object({ below: num, above: num, basis: str }),
+  roundingCents: num.optional(),
   rangeText: str,
 });
 
