@@ -1,4 +1,5 @@
-import { LengthField } from '~/components/forms/LengthField';
+import type { Units } from '~/lib/estimate/units.ts';
+import { LengthField } from './LengthField';
 import { TreatmentIcon } from './TreatmentIcon';
 import type { Draft, FieldErrors } from './draft';
 
@@ -9,9 +10,10 @@ type Props = {
   draft: Draft;
   errors: FieldErrors;
   onChange: (patch: Partial<Draft>) => void;
+  units: Units;
 };
 
-export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
+export function TreatmentStep({ treatments, draft, errors, onChange, units }: Props) {
   return (
     <div className="space-y-6">
       <fieldset>
@@ -48,6 +50,9 @@ export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
           <div className="mt-3 max-w-xs">
             <LengthField
               label="Height to the top of the cap rail"
+              units={units}
+              kind="wainscot-height"
+              required
               value={draft.wainscotHeight}
               onChange={(wainscotHeight) => onChange({ wainscotHeight })}
               error={errors['project.wainscotHeight']}
