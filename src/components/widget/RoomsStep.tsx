@@ -51,7 +51,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
               {(['room', 'walls'] as const).map((mode) => (
                 <label
                   key={mode}
-                  className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
+                  className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
                 >
                   <input type="radio" className="sr-only" name={`${domId}-mode`} checked={room.mode === mode} onChange={() => update(r, { mode })} />
                   {mode === 'room' ? 'Room length × width' : 'Wall by wall'}

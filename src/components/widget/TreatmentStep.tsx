@@ -22,7 +22,7 @@ export function TreatmentStep({ treatments, draft, errors, onChange, units }: Pr
           {treatments.map((t) => (
             <label
               key={t.id}
-              className={`flex cursor-pointer items-center gap-3 rounded-lg border bg-white p-3 ${draft.treatmentId === t.id ? 'border-2 border-[var(--brand)] bg-sawdust/30' : 'border-slate/30'}`}
+              className={`choice-card flex cursor-pointer items-center gap-3 rounded-lg border bg-white p-3 ${draft.treatmentId === t.id ? 'border-2 border-[var(--brand)] bg-sawdust/30' : 'border-slate/30'}`}
             >
               <input type="radio" name="treatment" className="sr-only" checked={draft.treatmentId === t.id} onChange={() => onChange({ treatmentId: t.id })} />
               <TreatmentIcon kind={t.kind} orientation={t.orientation} />
@@ -39,7 +39,7 @@ export function TreatmentStep({ treatments, draft, errors, onChange, units }: Pr
           {(['wainscot', 'full'] as const).map((height) => (
             <label
               key={height}
-              className={`cursor-pointer rounded-md border px-3 py-3 text-sm ${draft.height === height ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
+              className={`choice-card cursor-pointer rounded-md border px-3 py-3 text-sm ${draft.height === height ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
             >
               <input type="radio" name="height" className="sr-only" checked={draft.height === height} onChange={() => onChange({ height })} />
               {height === 'wainscot' ? 'Lower wall, finished with a cap rail' : 'Full height, floor to ceiling'}
