@@ -1,4 +1,5 @@
 import { useId } from 'react';
+import { countPhrase } from './count-phrase';
 
 type Props = { label: string; value: number; onChange: (value: number) => void; max?: number };
 
@@ -20,8 +21,10 @@ export function Counter({ label, value, onChange, max = 20 }: Props) {
         >
           −
         </button>
-        <output className="figures w-6 text-center" aria-live="polite">
-          {value}
+        {/* Announced with its item ("2 windows"), not as a bare number. */}
+        <output className="figures w-6 text-center" aria-live="polite" aria-atomic="true">
+          <span aria-hidden="true">{value}</span>
+          <span className="sr-only">{countPhrase(value, label)}</span>
         </output>
         <button
           type="button"

@@ -36,7 +36,7 @@ function Choice<T extends string>({
         {options.map(([option, label]) => (
           <label
             key={option}
-            className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${value === option ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
+            className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${value === option ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
           >
             <input type="radio" className="sr-only" name={name} required={required} checked={value === option} onChange={() => onChange(option)} />
             {label}

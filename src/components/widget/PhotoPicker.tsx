@@ -269,7 +269,7 @@ export default function PhotoPicker({ slug, formToken, onChange, onBusyChange }:
           }`,
         })}
       >
-        <input {...getInputProps({ 'aria-describedby': hintId })} />
+        <input {...getInputProps({ 'aria-label': 'Photos of your walls', 'aria-describedby': hintId })} />
         <button
           type="button"
           onClick={open}

@@ -4,6 +4,7 @@ import type { Units } from '~/lib/estimate/index.ts';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
 import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
+import { focusFirstError } from './focus-first-error';
 import { OptionsStep } from './OptionsStep';
 import { ResultView } from './ResultView';
 import { RoomsStep } from './RoomsStep';
@@ -70,6 +71,12 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
   // One key per widget visit: a double tap or a retried send makes one lead.
   const idempotencyKey = useMemo(() => crypto.randomUUID(), []);
   const headingRef = useRef<HTMLHeadingElement>(null);
+  // Counts refused Next presses, so each one moves focus to the first answer to fix.
+  const stepRef = useRef<HTMLDivElement>(null);
+  const [refusals, setRefusals] = useState(0);
+  useEffect(() => {
+    if (refusals > 0) focusFirstError(stepRef.current);
+  }, [refusals]);
   useReportHeight(hostOrigin);
 
   const { project, errors: localErrors } = useMemo(() => toProject(draft, units), [draft, units]);
@@ -108,6 +115,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
   const next = () => {
     if (stepHasErrors) {
       setShowErrors(true);
+      setRefusals((n) => n + 1);
       return;
     }
     setShowErrors(false);
@@ -168,10 +176,10 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
       <h2 ref={headingRef} tabIndex={-1} className="mt-1 text-2xl font-bold outline-none">
         {current.title}
       </h2>
-      <div className="mt-4">
+      <div className="mt-4" ref={stepRef}>
         {current.id === 'rooms' && <RoomsStep rooms={draft.rooms} units={units} errors={visibleErrors} onChange={(rooms) => setDraft({ ...draft, rooms })} />}
         {current.id === 'treatment' && (
-          <TreatmentStep treatments={treatments} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
+          <TreatmentStep treatments={treatments} units={units} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
         )}
         {current.id === 'options' && (
           <OptionsStep

@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import type { Units } from '~/lib/estimate/index.ts';
 import { Counter } from './Counter';
-import { LengthField } from '~/components/forms/LengthField';
+import { LengthField } from './LengthField';
 import { newKey, newRoom, type FieldErrors, type RoomDraft } from './draft';
 
 const ROOM_NAMES = ['Living room', 'Dining room', 'Bedroom', 'Hallway', 'Entry', 'Bathroom', 'Kitchen', 'Office', 'Stairway', 'Laundry'];
@@ -51,7 +51,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
               {(['room', 'walls'] as const).map((mode) => (
                 <label
                   key={mode}
-                  className={`cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
+                  className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
                 >
                   <input type="radio" className="sr-only" name={`${domId}-mode`} checked={room.mode === mode} onChange={() => update(r, { mode })} />
                   {mode === 'room' ? 'Room length × width' : 'Wall by wall'}
@@ -62,8 +62,24 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
             {room.mode === 'room' ? (
               <>
                 <div className="grid grid-cols-2 gap-3">
-                  <LengthField label="Room length" value={room.length} onChange={(length) => update(r, { length })} error={errors[`${at}.length`]} />
-                  <LengthField label="Room width" value={room.width} onChange={(width) => update(r, { width })} error={errors[`${at}.width`]} />
+                  <LengthField
+                    label="Room length"
+                    units={units}
+                    kind="room-length"
+                    required
+                    value={room.length}
+                    onChange={(length) => update(r, { length })}
+                    error={errors[`${at}.length`]}
+                  />
+                  <LengthField
+                    label="Room width"
+                    units={units}
+                    kind="room-width"
+                    required
+                    value={room.width}
+                    onChange={(width) => update(r, { width })}
+                    error={errors[`${at}.width`]}
+                  />
                 </div>
                 <fieldset>
                   <legend className="field-label">Walls to cover</legend>
@@ -94,6 +110,9 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                     <div className="flex-1">
                       <LengthField
                         label={`Wall ${w + 1} length`}
+                        units={units}
+                        kind="wall-length"
+                        required
                         value={wall.length}
                         onChange={(length) => update(r, { walls: room.walls.map((x, i) => (i === w ? { ...x, length } : x)) })}
                         error={errors[`${at}.walls.${w}.length`]}
@@ -122,6 +141,9 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
 
             <LengthField
               label="Ceiling height"
+              units={units}
+              kind="ceiling-height"
+              required
               value={room.ceilingHeight}
               onChange={(ceilingHeight) => update(r, { ceilingHeight })}
               error={errors[`${at}.ceilingHeight`]}

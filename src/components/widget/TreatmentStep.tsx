@@ -1,4 +1,5 @@
-import { LengthField } from '~/components/forms/LengthField';
+import type { Units } from '~/lib/estimate/units.ts';
+import { LengthField } from './LengthField';
 import { TreatmentIcon } from './TreatmentIcon';
 import type { Draft, FieldErrors } from './draft';
 
@@ -9,9 +10,10 @@ type Props = {
   draft: Draft;
   errors: FieldErrors;
   onChange: (patch: Partial<Draft>) => void;
+  units: Units;
 };
 
-export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
+export function TreatmentStep({ treatments, draft, errors, onChange, units }: Props) {
   return (
     <div className="space-y-6">
       <fieldset>
@@ -20,7 +22,7 @@ export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
           {treatments.map((t) => (
             <label
               key={t.id}
-              className={`flex cursor-pointer items-center gap-3 rounded-lg border bg-white p-3 ${draft.treatmentId === t.id ? 'border-2 border-[var(--brand)] bg-sawdust/30' : 'border-slate/30'}`}
+              className={`choice-card flex cursor-pointer items-center gap-3 rounded-lg border bg-white p-3 ${draft.treatmentId === t.id ? 'border-2 border-[var(--brand)] bg-sawdust/30' : 'border-slate/30'}`}
             >
               <input type="radio" name="treatment" className="sr-only" checked={draft.treatmentId === t.id} onChange={() => onChange({ treatmentId: t.id })} />
               <TreatmentIcon kind={t.kind} orientation={t.orientation} />
@@ -37,7 +39,7 @@ export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
           {(['wainscot', 'full'] as const).map((height) => (
             <label
               key={height}
-              className={`cursor-pointer rounded-md border px-3 py-3 text-sm ${draft.height === height ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
+              className={`choice-card cursor-pointer rounded-md border px-3 py-3 text-sm ${draft.height === height ? 'border-2 border-[var(--brand)] bg-sawdust/30 font-medium' : 'border-slate/30 bg-white'}`}
             >
               <input type="radio" name="height" className="sr-only" checked={draft.height === height} onChange={() => onChange({ height })} />
               {height === 'wainscot' ? 'Lower wall, finished with a cap rail' : 'Full height, floor to ceiling'}
@@ -48,6 +50,9 @@ export function TreatmentStep({ treatments, draft, errors, onChange }: Props) {
           <div className="mt-3 max-w-xs">
             <LengthField
               label="Height to the top of the cap rail"
+              units={units}
+              kind="wainscot-height"
+              required
               value={draft.wainscotHeight}
               onChange={(wainscotHeight) => onChange({ wainscotHeight })}
               error={errors['project.wainscotHeight']}

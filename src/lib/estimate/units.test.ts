@@ -40,6 +40,41 @@ describe('parseLength', () => {
     expect(parseLength(text, 'metric')).toBeCloseTo(inches, 9);
   });
 
+  // Source: NIST SP 811 §5.3 / Appendix B for the unit symbols (ft, in, m) and 1 ft = 12 in exactly;
+  // the prime (') and double prime (") for feet and inches are US trade usage (common practice, no source).
+  it.each([
+    ['7 1/2 ft', 90],
+    ['7-1/2 ft', 90],
+    [`7 1/2'`, 90],
+    ['7 ft 6 in', 90],
+    [`7' 6"`, 90],
+    [`7'6"`, 90],
+    ['7 feet 6 inches', 90],
+    ['7.5 ft', 90],
+  ])('reads feet with a fraction or inches: %s is %d in', (text, inches) => {
+    expect(parseLength(text, 'imperial')).toBeCloseTo(inches, 12);
+  });
+
+  // Source: ISO 80000-1:2009 §7.3.2 — the decimal sign is a comma or a point on the line (docs/sources.md §13).
+  it.each([
+    ['8,5 m', 8500 / 25.4],
+    ['2,44 m', 2440 / 25.4],
+    ['2,4 cm', 24 / 25.4],
+    ['0,5 m', 500 / 25.4],
+  ])('reads the decimal comma in metric: %s', (text, inches) => {
+    expect(parseLength(text, 'metric')).toBeCloseTo(inches, 9);
+    expect(parseLength(text, 'imperial')).toBeCloseTo(inches, 9);
+  });
+
+  // A comma before exactly three digits stays a thousands separator, as it was read before.
+  it('still reads 1,003 mm as one thousand and three millimetres', () => {
+    expect(parseLength('1,003 mm', 'metric')).toBeCloseTo(1003 / 25.4, 9);
+  });
+
+  it('does not take a comma in an imperial length as a decimal sign', () => {
+    expect(() => parseLength('8,5', 'imperial')).toThrow(LengthParseError);
+  });
+
   it('accepts an explicit metric unit from an imperial firm', () => {
     expect(parseLength('254 mm', 'imperial')).toBeCloseTo(10, 12);
   });

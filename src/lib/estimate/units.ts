@@ -33,12 +33,19 @@ const IMPERIAL_EXAMPLES = 'a length like 39 1/2, 39-1/2", 3\' 3-1/2" or 3 ft 3.5
 const METRIC_EXAMPLES = 'a length like 1003 mm, 100.3 cm or 1.003 m';
 
 const DEC = String.raw`(?:\d+(?:\.\d*)?|\.\d+)`;
+// Source: ISO 80000-1:2009 §7.3.2 — the decimal sign is a comma or a point on the line. Only metric text
+// reads a comma as a decimal sign (8,5 m); in feet and inches a comma is not a decimal sign.
+const METRIC_DEC = String.raw`(?:\d+(?:[.,]\d*)?|[.,]\d+)`;
 // A whole number with an optional fraction ("39 1/2", "39-1/2"), a bare fraction, or a decimal.
-const MIXED = String.raw`(?:(\d+)[\s-]+(\d+)\s*\/\s*(\d+)|(\d+)\s*\/\s*(\d+)|(${DEC}))`;
+const mixed = (name: string): string =>
+  String.raw`(?:(?<${name}Whole>\d+)[\s-]+(?<${name}Num>\d+)\s*\/\s*(?<${name}Den>\d+)|(?<${name}FracNum>\d+)\s*\/\s*(?<${name}FracDen>\d+)|(?<${name}Dec>${DEC}))`;
+// Source: NIST SP 811 §5.3 and Appendix B for the symbols ft and in; the prime and double prime are
+// trade usage for feet and inches (common practice, no source).
 const FEET_UNIT = String.raw`(?:'|ft\.?|feet|foot)`;
 const INCH_UNIT = String.raw`(?:"|''|in\.?|inch|inches)`;
-const IMPERIAL_RE = new RegExp(String.raw`^(?:(${DEC})\s*${FEET_UNIT})?\s*-?\s*(?:${MIXED}\s*(${INCH_UNIT})?)?$`);
-const METRIC_RE = new RegExp(String.raw`^(${DEC})\s*(mm|millimet(?:er|re)s?|cm|centimet(?:er|re)s?|m|met(?:er|re)s?)?$`);
+// Feet may carry a fraction too ("7 1/2 ft", "7-1/2'"), then optional inches ("7 ft 6 in", "7' 6\"").
+const IMPERIAL_RE = new RegExp(String.raw`^(?:${mixed('ft')}\s*${FEET_UNIT})?\s*-?\s*(?:${mixed('in')}\s*(?:${INCH_UNIT})?)?$`);
+const METRIC_RE = new RegExp(String.raw`^(${METRIC_DEC})\s*(mm|millimet(?:er|re)s?|cm|centimet(?:er|re)s?|m|met(?:er|re)s?)?$`);
 
 function normalise(text: string): string {
   return text
@@ -61,10 +68,20 @@ function fraction(numerator: string, denominator: string, whole: string | undefi
   return (whole === undefined ? 0 : Number(whole)) + n / d;
 }
 
+/** The number held by one of the regex's mixed-number groups, or undefined when that part was not typed. */
+function readMixed(groups: Record<string, string | undefined>, name: string, original: string): number | undefined {
+  const whole = groups[`${name}Whole`];
+  if (whole !== undefined) return fraction(groups[`${name}Num`]!, groups[`${name}Den`]!, whole, original);
+  const fracNum = groups[`${name}FracNum`];
+  if (fracNum !== undefined) return fraction(fracNum, groups[`${name}FracDen`]!, undefined, original);
+  const dec = groups[`${name}Dec`];
+  return dec === undefined ? undefined : Number(dec);
+}
+
 function parseMetric(s: string, bareIsMm: boolean, original: string): number | undefined {
   const m = METRIC_RE.exec(s);
   if (!m) return undefined;
-  const value = Number(m[1]);
+  const value = Number(m[1]!.replace(',', '.'));
   const unit = m[2];
   if (unit === undefined) return bareIsMm ? mmToInches(value) : undefined;
   if (unit.startsWith('mm') || unit.startsWith('milli')) return mmToInches(value);
@@ -75,8 +92,8 @@ function parseMetric(s: string, bareIsMm: boolean, original: string): number | u
 
 /**
  * Reads a length the way people type it from a tape and returns inches.
- * Imperial: `39 1/2`, `39-1/2"`, `3' 3-1/2"`, `3 ft 3.5 in`; a bare number means inches.
- * Metric: `1003 mm`, `100.3 cm`, `1.003 m`; a bare number means millimetres.
+ * Imperial: `39 1/2`, `39-1/2"`, `3' 3-1/2"`, `3 ft 3.5 in`, `7 1/2 ft`, `7-1/2 ft`; a bare number means inches.
+ * Metric: `1003 mm`, `100.3 cm`, `1.003 m`, `2,44 m` (decimal comma); a bare number means millimetres.
  * Text with an explicit metric unit is accepted whatever the firm's units.
  * @throws LengthParseError whose message says what was expected.
  */
@@ -90,16 +107,13 @@ export function parseLength(text: string, units: Units): number {
   const metric = parseMetric(s, units === 'metric', text);
   if (metric !== undefined) return metric;
 
-  const m = IMPERIAL_RE.exec(s);
-  if (!m || (m[1] === undefined && m[2] === undefined && m[5] === undefined && m[7] === undefined)) {
+  const g = IMPERIAL_RE.exec(s)?.groups;
+  const feet = g === undefined ? undefined : readMixed(g, 'ft', text);
+  const inchPart = g === undefined ? undefined : readMixed(g, 'in', text);
+  if (feet === undefined && inchPart === undefined) {
     throw new LengthParseError(`Expected ${expected}; got "${text}".`);
   }
-  const feet = m[1] === undefined ? 0 : Number(m[1]);
-  let inches = 0;
-  if (m[2] !== undefined) inches = fraction(m[3]!, m[4]!, m[2], text);
-  else if (m[5] !== undefined) inches = fraction(m[5], m[6]!, undefined, text);
-  else if (m[7] !== undefined) inches = Number(m[7]);
-  const value = feet * 12 + inches;
+  const value = (feet ?? 0) * 12 + (inchPart ?? 0);
   if (!Number.isFinite(value)) throw new LengthParseError(`Expected ${expected}; got "${text}".`);
   return value;
 }
