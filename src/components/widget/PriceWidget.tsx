@@ -171,7 +171,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
       <div className="mt-4">
         {current.id === 'rooms' && <RoomsStep rooms={draft.rooms} units={units} errors={visibleErrors} onChange={(rooms) => setDraft({ ...draft, rooms })} />}
         {current.id === 'treatment' && (
-          <TreatmentStep treatments={treatments} draft={draft} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
+          <TreatmentStep treatments={treatments} draft={draft} units={units} errors={visibleErrors} onChange={(patch) => setDraft({ ...draft, ...patch })} />
         )}
         {current.id === 'options' && (
           <OptionsStep

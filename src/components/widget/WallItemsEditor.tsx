@@ -27,7 +27,8 @@ export function WallItemsEditor({ items, onChange, where, withFixtures, compact 
   const set = (patch: Partial<WallItems>) => onChange({ ...items, ...patch });
   return (
     <div className="space-y-2">
-      <div className="grid grid-cols-2 gap-2">
+      {/* One column on a phone: two counters side by side do not fit 320 px. */}
+      <div className={`grid gap-2 ${compact ? 'min-[440px]:grid-cols-2' : 'sm:grid-cols-2'}`}>
         <Counter label="Doors" item={['door', 'doors']} where={where} compact={compact} value={items.doors} onChange={(doors) => set({ doors })} />
         <Counter label="Windows" item={['window', 'windows']} where={where} compact={compact} value={items.windows} onChange={(windows) => set({ windows })} />
         <Counter
