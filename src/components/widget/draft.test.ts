@@ -9,6 +9,7 @@ import {
   placeForMe,
   toProject,
   unansweredQuestions,
+  waitingFor,
   type Draft,
 } from './draft';
 import { fitProblem } from './wall-fit';
@@ -194,6 +195,9 @@ describe('a finish per room and one accent wall', () => {
       walls: [{ side: 'length', label: 'Long wall 2' }],
       treatment: { id: 'board-and-batten', height: 'full' },
     });
+    // Source: docs/sources.md §21 — four walls closing a room meet at four inside corners; the
+    // main room keeps all four, the accent wall's room none, so the corner trim is not lost.
+    expect([project!.rooms[1]!.insideCorners, project!.rooms[2]!.insideCorners]).toEqual([4, 0]);
     expect(origin).toEqual([
       { room: 0, accent: false, walls: [0, 1, 2, 3] },
       { room: 1, accent: false, walls: [0, 1, 3] },
@@ -256,5 +260,20 @@ describe('the draft against the estimating core', () => {
     const { project } = toProject({ ...draft, rooms: [room] }, 'imperial');
     expect(() => estimate(project, sampleRateBook())).not.toThrow();
     expect(project!.rooms.map((r) => r.treatment.height)).toEqual(['wainscot', 'full']);
+  });
+});
+
+describe('what the live range is waiting for', () => {
+  it('names the wall whose door and window do not fit before anything else', () => {
+    const draft = bathroom();
+    draft.rooms[0]!.width = "4'";
+    draft.rooms[0]!.roomWalls[1] = { ...draft.rooms[0]!.roomWalls[1], doors: 1, windows: 1 };
+    const errors = { 'project.treatment': 'Choose a finish.', ...toProject(draft, 'imperial').errors };
+    expect(waitingFor(errors, draft, 'imperial')).toBe('Waiting for Short wall 1 in the Bathroom: what is on it does not fit.');
+  });
+  it('names a missing size by room, and says nothing when all is answered', () => {
+    const draft = { ...newDraft('imperial'), treatmentId: 'shiplap', wainscotHeight: '36"' };
+    expect(waitingFor(toProject(draft, 'imperial').errors, draft, 'imperial')).toBe('Waiting for the ceiling height of the Room 1.');
+    expect(waitingFor(toProject(bathroom(), 'imperial').errors, bathroom(), 'imperial')).toBeNull();
   });
 });

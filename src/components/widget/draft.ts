@@ -7,6 +7,7 @@
  * step says where (`placeForMe`). Each room has its own finish (or the first room's), and may have one
  * accent wall in another finish, sent to the core as an extra room holding just that wall.
  */
+import { defaultInsideCorners } from '~/lib/estimate/corners.ts';
 import type { FixtureKind, ProjectInput } from '~/lib/estimate/schemas.ts';
 import { parseLength, type Units } from '~/lib/estimate/units.ts';
 import { listedWallNames, roomWallNames, ROOM_SIDES } from '~/lib/shared/wall-names.ts';
@@ -354,13 +355,22 @@ export function toProject(draft: Draft, units: Units): { project: ProjectInput |
       accentTreatment = finishOf(room.accent.finish, { treatment: `${at}.accent.treatment`, wainscotHeight: `${at}.accent.wainscotHeight` });
     }
     const main = covered.filter((v) => v !== accentWall);
+    // Split off, the accent wall would break the run of walls the core counts corners along; the
+    // main room keeps the corners of the whole room, so the corner trim is the same either way.
+    const split = accentWall && accentTreatment ? { insideCorners: defaultInsideCorners(covered.map(toWall)) } : {};
     if (main.length) {
       origin.push({ room: r, accent: false, walls: main.map((v) => v.index) });
-      rooms.push({ name, ...common, walls: main.map(toWall), treatment });
+      rooms.push({ name, ...common, ...split, walls: main.map(toWall), treatment });
     }
     if (accentWall && accentTreatment) {
       origin.push({ room: r, accent: true, walls: [accentWall.index] });
-      rooms.push({ name: accentRoomName(name), ...common, walls: [toWall(accentWall)], treatment: accentTreatment });
+      rooms.push({
+        name: accentRoomName(name),
+        ...common,
+        insideCorners: main.length ? 0 : split.insideCorners,
+        walls: [toWall(accentWall)],
+        treatment: accentTreatment,
+      });
     }
   });
   if (rooms.length > 20 && !errors['project.rooms']) errors['project.rooms'] = 'At most 20 rooms per estimate (an accent wall counts as a room).';
@@ -422,4 +432,39 @@ export function normaliseServerErrors(fields: FieldErrors, origin?: ProjectOrigi
     out[key] ??= message;
   }
   return out;
+}
+
+/**
+ * What the live range is waiting for, in the homeowner's words ("the Bathroom's Short wall 1: the
+ * door and window do not fit"), or null when nothing on the rooms or finish steps is missing. For
+ * the live bar, so it never sits on "Your range appears here" without saying why.
+ */
+export function waitingFor(errors: FieldErrors, draft: Draft, units: Units): string | null {
+  const roomName = (r: number) => draft.rooms[r]?.name.trim() || `Room ${r + 1}`;
+  const entries = Object.entries(errors).filter(([path]) => fieldStep(path) === 'rooms' || fieldStep(path) === 'treatment');
+  // A wall that cannot hold its items first: it is the answer most likely to be missed.
+  entries.sort(([a], [b]) => Number(!/\.walls\.\d+\.(openings|fixtures)/.test(a)) - Number(!/\.walls\.\d+\.(openings|fixtures)/.test(b)));
+  const first = entries[0];
+  if (!first) return null;
+  const [path] = first;
+  const wall = /^project\.rooms\.(\d+)\.walls\.(\d+)\.(openings|fixtures)/.exec(path);
+  if (wall) {
+    const r = Number(wall[1]);
+    const view = draft.rooms[r] ? roomWalls(draft.rooms[r]!, units)[Number(wall[2])] : undefined;
+    return `Waiting for ${view?.name ?? 'a wall'} in the ${roomName(r)}: what is on it does not fit.`;
+  }
+  const field = /^project\.rooms\.(\d+)\.(length|width|ceilingHeight|walls|placement|finish|accent)/.exec(path);
+  const words: Record<string, string> = {
+    length: 'the room length',
+    width: 'the room width',
+    ceilingHeight: 'the ceiling height',
+    walls: 'the walls to cover',
+    placement: 'a wall for each door and window',
+    finish: 'its finish',
+    accent: 'its accent wall',
+  };
+  if (field) return `Waiting for ${words[field[2]!]} of the ${roomName(Number(field[1]))}.`;
+  if (path === 'project.treatment') return 'Waiting for a finish.';
+  if (path === 'project.wainscotHeight') return 'Waiting for the height of the cap rail.';
+  return 'Waiting for an answer on this page.';
 }
