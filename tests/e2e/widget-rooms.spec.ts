@@ -112,6 +112,17 @@ test('a door and a window that cannot fit a 4 ft wall are named beside that wall
   await expect(page.getByTestId('wall-0-1')).toContainText('The door and window add up to 6\' 0", more than this 4\' 0" wall.', { timeout: 2_000 });
   await expect(page.getByTestId('wall-0-0')).not.toContainText('more than this');
   await expectNoViolations(page, 'rooms step with a wall that cannot hold its door and window');
+
+  // A removed room can be brought back, answers and all.
+  await page.getByRole('button', { name: 'Add another room' }).click();
+  await page.getByRole('group', { name: 'Room 2' }).getByLabel('Which room?').fill('Hallway');
+  await page.getByRole('group', { name: 'Room 2' }).getByRole('textbox', { name: 'Room length' }).fill("12'");
+  await page.getByRole('button', { name: 'Remove Hallway' }).click();
+  await expect(page.getByRole('group', { name: 'Room 2' })).toHaveCount(0);
+  await expect(page.getByRole('status').filter({ hasText: 'Hallway removed.' })).toBeVisible();
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await expect(page.getByRole('group', { name: 'Room 2' }).getByRole('textbox', { name: 'Room length' })).toHaveValue("12'");
+  await expect(page.getByRole('button', { name: 'Undo' })).toHaveCount(0);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(320);
   // Moving the window to another wall clears it.
   await page.getByRole('button', { name: 'Fewer windows on Short wall 1' }).click();
