@@ -39,3 +39,19 @@ describe('RoomsStep', () => {
     expect(damp('Bedroom')).toBe(false);
   });
 });
+
+describe('RoomsStep and the server', () => {
+  it("shows the server's message about a wall we placed things on, with the wall's name", () => {
+    // Source: docs/sources.md §30 — a firm's own casing may be wider than the usual 2-1/4 in, so the
+    // server can refuse a wall the browser accepted.
+    const room = {
+      ...newRoom('imperial', 'Hallway'),
+      length: "12'",
+      width: "4'",
+      ceilingHeight: "8'",
+      counts: { doors: 1, windows: 0, outlets: 0, switches: 0, fixtures: [] },
+    };
+    const html = render([room], { 'project.rooms.0.walls.0.openings': "No room for a door 3' wide." });
+    expect(html).toContain('role="alert">Long wall 1: No room for a door 3&#x27; wide.</p>');
+  });
+});

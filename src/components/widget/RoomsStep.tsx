@@ -230,6 +230,16 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                       Placed where they fit: {placed.notes.join('; ')}.
                     </p>
                   )}
+                  {/* The server's word on a wall we placed things on (its casing may be wider than the usual one). */}
+                  {views.flatMap((v) =>
+                    Object.entries(shown)
+                      .filter(([path]) => path.startsWith(`${at}.walls.${v.index}.`) && !path.endsWith('.length'))
+                      .map(([path, message]) => (
+                        <p key={path} className="field-error" role="alert">
+                          {v.name}: {message}
+                        </p>
+                      )),
+                  )}
                   {(shown[`${at}.placement`] || placed.unplaced.length > 0) && (
                     <p className="field-error" role="alert">
                       {shown[`${at}.placement`] ??
