@@ -1,6 +1,8 @@
 import { expect, test, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 import { query } from '../helpers/app-database';
+import { waitForMail } from '../helpers/mailbox';
+import { signedInAs } from './helpers/staff';
 
 // The rooms people have: a small bathroom whose door, window and tub are each on their own wall,
 // and a living room with one accent wall in another finish.
@@ -92,6 +94,17 @@ test('a 5 × 8 ft bathroom with the tub, door and window each on their own wall,
   );
 
   // The lead keeps each room's own walls and finishes: the accent wall is a room of its own.
+  // The homeowner's e-mail and the firm's lead page say the same, room by room.
+  const accentLine = 'accent wall Short wall 1: Board and batten, full height';
+  const confirmation = await waitForMail({ to: email, subject: 'Your price estimate', timeoutMs: 15_000 });
+  expect(confirmation.text).toContain(accentLine);
+  const [stored] = await query<{ id: string }>('select id from lead where email = $1', [email]);
+  const olive = await signedInAs('olive@cedar-hollow.test');
+  const staffHtml = await (await olive.get(`/app/leads/${stored!.id}`)).text();
+  expect(staffHtml).toContain('Short wall 1: Board and batten, full height');
+  expect(staffHtml).toMatch(/Bathroom\s*\(damp room\)/);
+  await olive.dispose();
+
   type StoredRooms = { data: { rooms: Array<{ name: string; treatment: { id: string; height: string }; walls: Array<{ label: string }> }> } };
   const [lead] = await query<{ inputs: StoredRooms }>('select inputs from lead where email = $1', [email]);
   expect(lead!.inputs.data.rooms.map((r) => [r.name, r.treatment.id, r.treatment.height, r.walls.map((w) => w.label).join(', ')])).toEqual([

@@ -66,7 +66,10 @@ export type Draft = {
 };
 
 let counter = 0;
-export const newKey = (): string => `k${++counter}`;
+// A random part as well as a count: a draft kept in the browser and read back after a reload must
+// not share keys with rooms and walls added after it (React keys only, never in the markup).
+const session = Math.random().toString(36).slice(2, 8);
+export const newKey = (): string => `k${session}${++counter}`;
 
 export const noItems = (): WallItems => ({ doors: 0, windows: 0, outlets: 0, switches: 0, fixtures: [] });
 export const newWall = (covered = true): WallDraft => ({ key: newKey(), length: '', covered, ...noItems() });
