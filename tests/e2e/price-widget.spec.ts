@@ -32,16 +32,28 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await widget.getByLabel('Which room?').first().fill('Dining room');
   await widget.getByRole('textbox', { name: 'Room length' }).fill("13'");
   await widget.getByRole('textbox', { name: 'Room width' }).fill('11\' 6"');
+  // Rooms start empty: every size is typed, the counts start at nought.
+  await widget.getByRole('textbox', { name: 'Ceiling height' }).first().fill("8'");
+  await widget
+    .getByRole('button', { name: /^More doors/ })
+    .first()
+    .click();
+  await widget
+    .getByRole('button', { name: /^More windows/ })
+    .first()
+    .click();
   await widget.getByRole('button', { name: 'Add another room' }).click();
   const room2 = widget.getByRole('group', { name: 'Room 2' });
   await room2.getByLabel('Which room?').fill('Hallway');
   await room2.getByText('Wall by wall').click();
   await room2.getByLabel('Wall 1 length').fill('12 ft 6 in');
-  await room2.getByRole('button', { name: 'Fewer windows' }).click();
+  await room2.getByRole('textbox', { name: 'Ceiling height' }).fill("8'");
+  await room2.getByRole('button', { name: /^More doors/ }).click();
   await widget.getByRole('button', { name: 'Next' }).click();
 
   await expect(widget.getByRole('heading', { name: 'Treatment and height' })).toBeVisible();
-  await widget.getByText('Board and batten').click();
+  await widget.getByText('Board and batten').first().click();
+  await widget.getByRole('textbox', { name: 'Height to the top of the cap rail' }).first().fill('36"');
   // The range appears as soon as the inputs allow.
   await expect(widget.getByTestId('live-range')).toContainText('$', { timeout: 10_000 });
   await widget.getByRole('button', { name: 'Next' }).click();

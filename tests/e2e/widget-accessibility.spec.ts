@@ -54,6 +54,10 @@ for (const brand of brands)
     // The primary action wears the firm's brand colour, with text chosen by contrast.
     await expect(page.getByRole('button', { name: 'Next' })).toHaveCSS('background-color', brand.background);
     await expect(page.getByRole('button', { name: 'Next' })).toHaveCSS('color', brand.text);
+    // Rooms start empty: the sizes are typed.
+    await page.getByRole('textbox', { name: 'Room length' }).fill("14'");
+    await page.getByRole('textbox', { name: 'Room width' }).fill("12'");
+    await page.getByRole('textbox', { name: 'Ceiling height' }).fill("8'");
     await page.getByRole('button', { name: 'Next' }).click();
     // Each step moves focus to its heading for screen reader users.
     await expect(page.getByRole('heading', { name: 'Treatment and height' })).toBeFocused();
@@ -61,6 +65,7 @@ for (const brand of brands)
     await page.getByRole('radio').first().focus();
     await page.keyboard.press('ArrowDown');
     await expect(page.getByRole('radio').nth(1)).toBeChecked();
+    await page.getByRole('textbox', { name: 'Height to the top of the cap rail' }).fill('36"');
     await expectNoViolations(page, 'treatment');
 
     await page.getByRole('button', { name: 'Next' }).click();

@@ -6,10 +6,12 @@ type Props = {
   onChange: (value: string) => void;
   error?: string;
   hint?: string;
+  /** An example answer shown while the field is empty. */
+  placeholder?: string;
 };
 
 /** A length typed the way a tape reads (11' 4", 39 1/2, 2.4 m); the server parses the same way. */
-export function LengthField({ label, value, onChange, error, hint }: Props) {
+export function LengthField({ label, value, onChange, error, hint, placeholder }: Props) {
   const id = useId();
   const describedBy = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ') || undefined;
   return (
@@ -21,6 +23,7 @@ export function LengthField({ label, value, onChange, error, hint }: Props) {
         id={id}
         className="field-input figures"
         value={value}
+        placeholder={placeholder}
         inputMode="text"
         autoComplete="off"
         aria-invalid={error ? true : undefined}

@@ -1,4 +1,4 @@
-import type { Draft, FieldErrors, RoomDraft } from './draft';
+import { isDamp, type Draft, type FieldErrors, type RoomDraft } from './draft';
 
 type Props = { draft: Draft; errors: FieldErrors; onChange: (patch: Partial<Draft>) => void; onRoomsChange: (rooms: RoomDraft[]) => void };
 
@@ -99,7 +99,7 @@ export function OptionsStep({ draft, errors, onChange, onRoomsChange }: Props) {
               <input
                 type="checkbox"
                 className="h-5 w-5 accent-[var(--brand)]"
-                checked={room.damp}
+                checked={isDamp(room)}
                 onChange={(event) => onRoomsChange(draft.rooms.map((x, j) => (j === i ? { ...x, damp: event.target.checked } : x)))}
               />
               {room.name || `Room ${i + 1}`}

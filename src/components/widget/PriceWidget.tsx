@@ -3,7 +3,7 @@ import useSWR from 'swr';
 import type { Units } from '~/lib/estimate/index.ts';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
-import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
+import { fieldStep, newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
 import { focusFirstError } from './focus-first-error';
 import { OptionsStep } from './OptionsStep';
 import { ResultView } from './ResultView';
@@ -79,7 +79,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
   }, [refusals]);
   useReportHeight(hostOrigin);
 
-  const { project, errors: localErrors } = useMemo(() => toProject(draft, units), [draft, units]);
+  const { project, errors: localErrors, origin } = useMemo(() => toProject(draft, units), [draft, units]);
   const latestKey = project ? JSON.stringify({ project, photos: photos.length }) : null;
   const requestKey = useDebounced(latestKey, 400);
   const live = useSWR(requestKey ? ['estimate', slug, requestKey] : null, ([, , key]) => fetchEstimate(slug, formToken, JSON.parse(key).project), {
@@ -87,7 +87,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
     revalidateOnFocus: false,
     shouldRetryOnError: false,
   });
-  const serverErrors = live.error instanceof ApiError ? normaliseServerErrors(live.error.fields) : {};
+  const serverErrors = live.error instanceof ApiError ? normaliseServerErrors(live.error.fields, origin, draft) : {};
   const errors = { ...serverErrors, ...localErrors, ...unansweredQuestions(draft) };
   const estimate = project && !live.error ? live.data : undefined;
   // Shown dimmed while the answers on screen are newer than the range.
@@ -102,9 +102,9 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
   }, [step, sent]);
 
   const stepErrorKeys: Record<(typeof STEPS)[number]['id'], (path: string) => boolean> = {
-    rooms: (p) => p.startsWith('project.rooms'),
-    treatment: (p) => p === 'project.treatment' || p === 'project.wainscotHeight',
-    options: (p) => p === 'project.builtBefore1978',
+    rooms: (p) => fieldStep(p) === 'rooms',
+    treatment: (p) => fieldStep(p) === 'treatment',
+    options: (p) => fieldStep(p) === 'options',
     photos: () => false,
     result: () => false,
     contact: () => false,

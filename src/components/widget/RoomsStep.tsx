@@ -1,11 +1,24 @@
-import { useId } from 'react';
+import { useEffect, useId, useRef, useState } from 'react';
 import type { Units } from '~/lib/estimate/index.ts';
-import { Counter } from './Counter';
 import { LengthField } from './LengthField';
-import { newKey, newRoom, type FieldErrors, type RoomDraft } from './draft';
+import {
+  isDamp,
+  newWall,
+  newRoom,
+  offersFixtures,
+  placeForMe,
+  placeholders,
+  roomWalls,
+  wallFitErrors,
+  type FieldErrors,
+  type RoomDraft,
+  type WallDraft,
+} from './draft';
+import { WallItemsEditor } from './WallItemsEditor';
 
 const ROOM_NAMES = ['Living room', 'Dining room', 'Bedroom', 'Hallway', 'Entry', 'Bathroom', 'Kitchen', 'Office', 'Stairway', 'Laundry'];
-const WALL_NAMES = ['First long wall', 'First short wall', 'Second long wall', 'Second short wall'];
+/** How long "Undo" stays after a room is removed. */
+const UNDO_MS = 10_000;
 
 type Props = {
   rooms: RoomDraft[];
@@ -17,15 +30,42 @@ type Props = {
 export function RoomsStep({ rooms, units, errors, onChange }: Props) {
   // DOM ids come from useId (stable between server and browser), not from the draft's keys.
   const baseId = useId();
+  const [removed, setRemoved] = useState<{ room: RoomDraft; index: number } | null>(null);
+  const undoTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  useEffect(() => () => clearTimeout(undoTimer.current), []);
   const update = (index: number, patch: Partial<RoomDraft>) => onChange(rooms.map((room, i) => (i === index ? { ...room, ...patch } : room)));
+  const remove = (index: number) => {
+    setRemoved({ room: rooms[index]!, index });
+    clearTimeout(undoTimer.current);
+    undoTimer.current = setTimeout(() => setRemoved(null), UNDO_MS);
+    onChange(rooms.filter((_, i) => i !== index));
+  };
+  const undo = () => {
+    if (!removed) return;
+    onChange([...rooms.slice(0, removed.index), removed.room, ...rooms.slice(removed.index)]);
+    setRemoved(null);
+  };
+  const examples = placeholders(units);
   const hint = units === 'imperial' ? 'Type it as your tape reads: 11\' 4", 136 or 11 ft 4 in.' : 'In mm, cm or m: 3450 mm, 345 cm, 3.45 m.';
   return (
     <div className="space-y-6">
       {rooms.map((room, r) => {
         const at = `project.rooms.${r}`;
         const domId = `${baseId}-room${r}`;
+        // Fit messages show as soon as they are true, next to their wall.
+        const shown = { ...errors, ...wallFitErrors(room, r, units) };
+        const views = roomWalls(room, units);
+        const setWall = (index: number, patch: Partial<WallDraft>) => {
+          if (room.mode === 'room') {
+            const roomWalls = room.roomWalls.map((w, i) => (i === index ? { ...w, ...patch } : w)) as RoomDraft['roomWalls'];
+            update(r, { roomWalls });
+          } else update(r, { walls: room.walls.map((w, i) => (i === index ? { ...w, ...patch } : w)) });
+        };
+        const withFixtures = offersFixtures(room);
+        const placed = room.placement === 'auto' ? placeForMe(room, units) : null;
+        const label = room.name.trim() || `Room ${r + 1}`;
         return (
-          <fieldset key={room.key} className="space-y-4 rounded-lg border border-slate/30 bg-white p-4">
+          <fieldset key={room.key} className="space-y-4 rounded-lg border border-slate/30 bg-white p-4" data-testid={`room-${r}`}>
             <legend className="px-1 text-base font-bold">Room {r + 1}</legend>
             <div>
               <label className="field-label" htmlFor={`${domId}-name`}>
@@ -36,6 +76,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                 className="field-input"
                 list={`${domId}-names`}
                 value={room.name}
+                placeholder={examples.name}
                 maxLength={60}
                 onChange={(event) => update(r, { name: event.target.value })}
               />
@@ -45,6 +86,24 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                 ))}
               </datalist>
               {errors[`${at}.name`] && <p className="field-error">{errors[`${at}.name`]}</p>}
+              <label className="mt-2 flex items-center gap-2 text-sm">
+                <input
+                  type="checkbox"
+                  className="h-5 w-5 accent-[var(--brand)]"
+                  checked={isDamp(room)}
+                  onChange={(event) => update(r, { damp: event.target.checked })}
+                />
+                This room gets damp (bathroom, laundry, shower room)
+              </label>
+              <label className="mt-1 flex items-center gap-2 text-sm">
+                <input
+                  type="checkbox"
+                  className="h-5 w-5 accent-[var(--brand)]"
+                  checked={withFixtures}
+                  onChange={(event) => update(r, { hasFixtures: event.target.checked })}
+                />
+                It has a tub, shower, vanity, toilet, radiator or built-in cabinet against a wall
+              </label>
             </div>
 
             <div role="radiogroup" aria-label="How would you like to give the sizes?" className="grid grid-cols-2 gap-2">
@@ -53,7 +112,13 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                   key={mode}
                   className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
                 >
-                  <input type="radio" className="sr-only" name={`${domId}-mode`} checked={room.mode === mode} onChange={() => update(r, { mode })} />
+                  <input
+                    type="radio"
+                    className="sr-only"
+                    name={`${domId}-mode`}
+                    checked={room.mode === mode}
+                    onChange={() => update(r, { mode, accent: null })}
+                  />
                   {mode === 'room' ? 'Room length × width' : 'Wall by wall'}
                 </label>
               ))}
@@ -83,20 +148,17 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                 </div>
                 <fieldset>
                   <legend className="field-label">Walls to cover</legend>
+                  <p className="text-xs text-slate">Clockwise, starting from a wall along the room's length.</p>
                   <div className="mt-1 grid grid-cols-2 gap-2">
-                    {WALL_NAMES.map((name, w) => (
-                      <label key={name} className="flex items-center gap-2 text-sm">
+                    {views.map((v) => (
+                      <label key={v.wall.key} className="flex items-center gap-2 text-sm">
                         <input
                           type="checkbox"
                           className="h-5 w-5 accent-[var(--brand)]"
-                          checked={room.coverWalls[w]}
-                          onChange={(event) => {
-                            const coverWalls = [...room.coverWalls] as RoomDraft['coverWalls'];
-                            coverWalls[w] = event.target.checked;
-                            update(r, { coverWalls });
-                          }}
+                          checked={v.covered}
+                          onChange={(event) => setWall(v.index, { covered: event.target.checked })}
                         />
-                        {name}
+                        {v.name}
                       </label>
                     ))}
                   </div>
@@ -114,7 +176,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                         kind="wall-length"
                         required
                         value={wall.length}
-                        onChange={(length) => update(r, { walls: room.walls.map((x, i) => (i === w ? { ...x, length } : x)) })}
+                        onChange={(length) => setWall(w, { length })}
                         error={errors[`${at}.walls.${w}.length`]}
                       />
                     </div>
@@ -123,7 +185,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                         type="button"
                         className="button-quiet mb-0.5 px-3"
                         aria-label={`Remove wall ${w + 1}`}
-                        onClick={() => update(r, { walls: room.walls.filter((_, i) => i !== w) })}
+                        onClick={() => update(r, { walls: room.walls.filter((_, i) => i !== w), accent: null })}
                       >
                         Remove
                       </button>
@@ -131,7 +193,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                   </div>
                 ))}
                 {room.walls.length < 16 && (
-                  <button type="button" className="button-quiet" onClick={() => update(r, { walls: [...room.walls, { key: newKey(), length: '' }] })}>
+                  <button type="button" className="button-quiet" onClick={() => update(r, { walls: [...room.walls, newWall()] })}>
                     Add a wall
                   </button>
                 )}
@@ -149,28 +211,99 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
               error={errors[`${at}.ceilingHeight`]}
             />
 
-            <div className="grid gap-2 sm:grid-cols-2">
-              <Counter label="Doors" value={room.doors} onChange={(doors) => update(r, { doors })} />
-              <Counter label="Windows" value={room.windows} onChange={(windows) => update(r, { windows })} />
-              <Counter label="Outlets" value={room.outlets} onChange={(outlets) => update(r, { outlets })} max={40} />
-              <Counter label="Light switches" value={room.switches} onChange={(switches) => update(r, { switches })} max={40} />
-            </div>
-            {Object.entries(errors)
-              .filter(([path]) => path.startsWith(`${at}.walls.`) && !path.endsWith('.length'))
-              .map(([path, message]) => (
-                <p key={path} className="field-error">
-                  {message}
-                </p>
-              ))}
+            <fieldset className="space-y-3">
+              <legend className="field-label">Doors, windows and outlets{withFixtures ? ', fixtures' : ''}</legend>
+              <div role="radiogroup" aria-label={`Where are they in the ${label}?`} className="grid grid-cols-2 gap-2">
+                {(['auto', 'by-wall'] as const).map((placement) => (
+                  <label
+                    key={placement}
+                    className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${room.placement === placement ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
+                  >
+                    <input
+                      type="radio"
+                      className="sr-only"
+                      name={`${domId}-placement`}
+                      checked={room.placement === placement}
+                      onChange={() => update(r, { placement })}
+                    />
+                    {placement === 'auto' ? 'Count them; place them for me' : "I'll say which wall"}
+                  </label>
+                ))}
+              </div>
+              {placed ? (
+                <>
+                  <WallItemsEditor items={room.counts} withFixtures={withFixtures} where={`in the ${label}`} onChange={(counts) => update(r, { counts })} />
+                  {placed.notes.length > 0 && (
+                    <p className="text-sm text-slate" role="status" data-testid="placed-note">
+                      Placed where they fit: {placed.notes.join('; ')}.
+                    </p>
+                  )}
+                  {/* The server's word on a wall we placed things on (its casing may be wider than the usual one). */}
+                  {views.flatMap((v) =>
+                    Object.entries(shown)
+                      .filter(([path]) => path.startsWith(`${at}.walls.${v.index}.`) && !path.endsWith('.length'))
+                      .map(([path, message]) => (
+                        <p key={path} className="field-error" role="alert">
+                          {v.name}: {message}
+                        </p>
+                      )),
+                  )}
+                  {(shown[`${at}.placement`] || placed.unplaced.length > 0) && (
+                    <p className="field-error" role="alert">
+                      {shown[`${at}.placement`] ??
+                        `We could not find a wall with room for ${placed.unplaced.join(', ')}. Choose the walls yourself, or check the sizes and the walls to cover.`}
+                    </p>
+                  )}
+                </>
+              ) : (
+                views
+                  .filter((v) => v.covered)
+                  .map((v) => {
+                    const wallAt = `${at}.walls.${v.index}`;
+                    const messages = Object.entries(shown).filter(([path]) => path.startsWith(`${wallAt}.`) && !path.endsWith('.length'));
+                    return (
+                      <div
+                        key={v.wall.key}
+                        role="group"
+                        aria-label={v.name}
+                        data-testid={`wall-${r}-${v.index}`}
+                        className={`space-y-2 rounded-md border p-2 ${messages.length ? 'border-brick' : 'border-slate/20'}`}
+                      >
+                        <p className="text-sm font-bold">{v.name}</p>
+                        <WallItemsEditor
+                          compact
+                          items={v.wall}
+                          withFixtures={withFixtures}
+                          where={`on ${v.name}`}
+                          onChange={(items) => setWall(v.index, items)}
+                        />
+                        {messages.map(([path, message]) => (
+                          <p key={path} className="field-error" role="alert">
+                            {message}
+                          </p>
+                        ))}
+                      </div>
+                    );
+                  })
+              )}
+            </fieldset>
 
             {rooms.length > 1 && (
-              <button type="button" className="text-sm text-brick underline" onClick={() => onChange(rooms.filter((_, i) => i !== r))}>
-                Remove {room.name || `room ${r + 1}`}
+              <button type="button" className="text-sm text-brick underline" onClick={() => remove(r)}>
+                Remove {label}
               </button>
             )}
           </fieldset>
         );
       })}
+      {removed && (
+        <p role="status" className="flex items-center justify-between gap-3 rounded-md border border-slate/30 bg-sawdust/30 px-3 py-2 text-sm">
+          <span>{removed.room.name.trim() || `Room ${removed.index + 1}`} removed.</span>
+          <button type="button" className="button-quiet px-3 py-1" onClick={undo}>
+            Undo
+          </button>
+        </p>
+      )}
       {/* About the project as a whole, e.g. too big for one online estimate. */}
       {errors['project.rooms'] && (
         <p className="field-error" role="alert">
@@ -178,11 +311,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
         </p>
       )}
       {rooms.length < 20 && (
-        <button
-          type="button"
-          className="button-quiet w-full"
-          onClick={() => onChange([...rooms, newRoom(units, ROOM_NAMES[rooms.length % ROOM_NAMES.length])])}
-        >
+        <button type="button" className="button-quiet w-full" onClick={() => onChange([...rooms, newRoom(units)])}>
           Add another room
         </button>
       )}

@@ -1,6 +1,7 @@
 import type { Company } from '../companies/company.entity';
 import type { HomeownerEstimate } from '../estimates/present-estimate';
 import { formatMoney } from '~/lib/estimate';
+import { describeRoomChoice, type RoomChoice } from './room-choices';
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 /** Everything a homeowner typed is escaped before it goes into HTML mail. */
@@ -68,7 +69,7 @@ function renderHtml(blocks: Block[]): string {
  * the rooms, how it adds up, the cautions in short (the full text is behind the link), and how to
  * reach the firm.
  */
-export function homeownerConfirmation(company: Company, lead: LeadFacts, view: HomeownerEstimate, viewUrl: string) {
+export function homeownerConfirmation(company: Company, lead: LeadFacts, view: HomeownerEstimate, viewUrl: string, choices?: RoomChoice[]) {
   const money = (cents: number) => formatMoney(cents, view.currency, view.locale, { wholeUnits: true });
   const phone: Part[] = company.phone ? [' on ', { strong: company.phone }] : [];
   const blocks: Block[] = [
@@ -79,9 +80,12 @@ export function homeownerConfirmation(company: Company, lead: LeadFacts, view: H
     {
       kind: 'list',
       heading: 'Your rooms',
-      items: view.rooms.map((r) => [
-        `${r.name}: ${r.treatmentName}, ${r.height === 'full' ? 'full height' : 'wainscot height'}, about ${Math.round(r.netSqFt)} sq ft`,
-      ]),
+      // Per room as it was asked (finish, height, walls, accent wall) when the choices are known.
+      items: choices
+        ? choices.map((c) => [describeRoomChoice(c)])
+        : view.rooms.map((r) => [
+            `${r.name}: ${r.treatmentName}, ${r.height === 'full' ? 'full height' : 'wainscot height'}, about ${Math.round(r.netSqFt)} sq ft`,
+          ]),
     },
     { kind: 'list', heading: 'How the middle of the range adds up', items: view.groups.map((g) => [`${g.label}: about ${money(g.cents)}`]) },
     ...(view.cautions.length
@@ -101,14 +105,16 @@ export function homeownerConfirmation(company: Company, lead: LeadFacts, view: H
 }
 
 /** The firm's new-lead alert, linking to the lead in the staff area. */
-export function newLeadAlert(company: Company, lead: LeadFacts, view: HomeownerEstimate, staffUrl: string, photoCount: number) {
+export function newLeadAlert(company: Company, lead: LeadFacts, view: HomeownerEstimate, staffUrl: string, photoCount: number, choices?: RoomChoice[]) {
+  const rooms = choices ? choices.map(describeRoomChoice) : view.rooms.map((r) => `${r.name} (${r.treatmentName})`);
   const text = [
     `New inquiry ${lead.reference} for ${company.name}: ${view.range.text}.`,
     '',
     `${lead.name} · ${lead.phone} · ${lead.email}`,
     `${lead.address}, ${lead.postcode}`,
     `Prefers: ${lead.preferredContact}`,
-    `Rooms: ${view.rooms.map((r) => `${r.name} (${r.treatmentName})`).join(', ')}`,
+    'Rooms:',
+    ...rooms.map((r) => `- ${r}`),
     `Photos: ${photoCount}`,
     ...(lead.message ? ['', `Note: ${lead.message}`] : []),
     '',
@@ -117,7 +123,8 @@ export function newLeadAlert(company: Company, lead: LeadFacts, view: HomeownerE
   const html = `<div style="font-family:'DM Sans',Arial,sans-serif;color:#1F2A2E">
 <p><strong>New inquiry ${escapeHtml(lead.reference)}</strong>: ${escapeHtml(view.range.text)}</p>
 <p>${escapeHtml(lead.name)} · ${escapeHtml(lead.phone)} · ${escapeHtml(lead.email)}<br>${escapeHtml(lead.address)}, ${escapeHtml(lead.postcode)}<br>Prefers: ${escapeHtml(lead.preferredContact)}</p>
-<p>Rooms: ${escapeHtml(view.rooms.map((r) => `${r.name} (${r.treatmentName})`).join(', '))} · Photos: ${photoCount}</p>
+<p>Rooms:</p><ul>${rooms.map((r) => `<li>${escapeHtml(r)}</li>`).join('')}</ul>
+<p>Photos: ${photoCount}</p>
 ${lead.message ? `<p>Note: ${escapeHtml(lead.message)}</p>` : ''}
 <p><a href="${escapeHtml(staffUrl)}" style="color:#2F6B4F">Open the lead</a></p>
 </div>`;

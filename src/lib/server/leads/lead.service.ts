@@ -16,6 +16,7 @@ import { kickMailDelivery } from '../mail/delivery-job';
 import { Lead } from './lead.entity';
 import { leadInputs } from './lead-inputs';
 import { firmReplyTo, homeownerConfirmation, newLeadAlert } from './lead-mail';
+import { roomChoices } from './room-choices';
 import { newLeadReference } from './lead-reference';
 
 const digest = (text: string) => createHash('sha256').update(text).digest('hex');
@@ -114,9 +115,10 @@ export async function createLead(
       await inTransaction?.(tx, lead);
 
       const facts = { ...input.contact, reference: lead.reference, message: lead.message };
-      const confirmation = homeownerConfirmation(company, facts, view, leadViewUrl(lead.id, viewToken));
+      const choices = roomChoices(result.takeoff.rooms, result.takeoff.units);
+      const confirmation = homeownerConfirmation(company, facts, view, leadViewUrl(lead.id, viewToken), choices);
       enqueueMail(tx, { to: lead.email, ...confirmation, companyId: company.id, fromName: company.name, replyTo: firmReplyTo(company) });
-      const alert = newLeadAlert(company, facts, view, staffLeadUrl(lead.id), input.photoCount ?? 0);
+      const alert = newLeadAlert(company, facts, view, staffLeadUrl(lead.id), input.photoCount ?? 0, choices);
       for (const to of company.notificationEmails) enqueueMail(tx, { to, ...alert, companyId: company.id, replyTo: lead.email });
       await tx.flush();
       return lead;
