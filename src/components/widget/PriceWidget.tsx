@@ -3,11 +3,13 @@ import useSWR from 'swr';
 import type { Units } from '~/lib/estimate/index.ts';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
+import { LiveRange, type LiveRangeState } from './LiveRange';
 import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
 import { OptionsStep } from './OptionsStep';
 import { ResultView } from './ResultView';
 import { RoomsStep } from './RoomsStep';
 import { TreatmentStep, type OfferedTreatment } from './TreatmentStep';
+import { waitingFor, type WaitingContext } from './waiting-for';
 
 // The photo and contact steps carry the heavier libraries (dropzone, form validation, phone
 // numbers); they load in the background once the homeowner is past the first step.
@@ -78,13 +80,32 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
   const live = useSWR(requestKey ? ['estimate', slug, requestKey] : null, ([, , key]) => fetchEstimate(slug, formToken, JSON.parse(key).project), {
     keepPreviousData: true,
     revalidateOnFocus: false,
+    // api.ts makes the one automatic retry inside its own time limit; after that the homeowner decides.
     shouldRetryOnError: false,
   });
-  const serverErrors = live.error instanceof ApiError ? normaliseServerErrors(live.error.fields) : {};
-  const errors = { ...serverErrors, ...localErrors, ...unansweredQuestions(draft) };
-  const estimate = project && !live.error ? live.data : undefined;
+  const liveError = live.error ? (live.error instanceof ApiError ? live.error : new ApiError('Something went wrong. Please try again.', 0)) : null;
+  const serverErrors = liveError ? normaliseServerErrors(liveError.fields) : {};
+  // What stops the range (unanswered questions do not: the range is priced cautiously until then).
+  const blockingErrors = { ...serverErrors, ...localErrors };
+  const errors = { ...blockingErrors, ...unansweredQuestions(draft) };
+  const estimate = project && !liveError ? live.data : undefined;
   // Shown dimmed while the answers on screen are newer than the range.
   const updating = latestKey !== requestKey || live.isValidating;
+  // Server paths count walls as they were sent, so name them from the project that was sent.
+  const sentProject = useMemo(() => (requestKey ? (JSON.parse(requestKey).project as WaitingContext) : null), [requestKey]);
+  const waitingContext: WaitingContext = (Object.keys(serverErrors).length ? sentProject : null) ??
+    (project as WaitingContext | null) ?? { rooms: draft.rooms.map((room) => ({ name: room.name })) };
+  const waiting = waitingFor(blockingErrors, waitingContext);
+  const liveState: LiveRangeState = estimate
+    ? { kind: 'range', estimate, updating }
+    : waiting
+      ? { kind: 'waiting', what: waiting }
+      : liveError
+        ? { kind: 'failed', error: liveError }
+        : project
+          ? { kind: 'working' }
+          : { kind: 'empty' };
+  const retry = () => void live.mutate();
 
   useEffect(() => {
     headingRef.current?.focus();
@@ -104,6 +125,15 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
   };
   const current = STEPS[step]!;
   const stepHasErrors = Object.keys(errors).some(stepErrorKeys[current.id]);
+  const stepWaiting = waitingFor(Object.fromEntries(Object.entries(errors).filter(([path]) => stepErrorKeys[current.id](path))), waitingContext);
+  /** Opens the step that asks the question a field path names, with its messages shown. */
+  const goToAnswer = (paths: string[]) => {
+    const normalised = Object.keys(normaliseServerErrors(Object.fromEntries(paths.map((p) => [p, '']))));
+    const target = STEPS.findIndex((s) => normalised.some(stepErrorKeys[s.id]));
+    if (target < 0) return;
+    setShowErrors(true);
+    setStep(target);
+  };
 
   const next = () => {
     if (stepHasErrors) {
@@ -161,10 +191,18 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
 
   const visibleErrors = showErrors ? errors : serverErrors;
   return (
-    <div className="mx-auto max-w-xl p-4 pb-28">
-      <p className="text-sm text-slate">
-        Step {step + 1} of {STEPS.length}
-      </p>
+    <div className="mx-auto max-w-xl p-4 pb-0">
+      <div className="flex flex-wrap items-baseline justify-between gap-x-3 text-sm text-slate">
+        <p>
+          Step {step + 1} of {STEPS.length}
+        </p>
+        {/* A copy of the range at the top, for a step taller than the screen; the bar below announces it. */}
+        {current.id !== 'result' && (
+          <p aria-hidden="true" data-testid="live-range-top">
+            <LiveRange state={liveState} onRetry={retry} compact />
+          </p>
+        )}
+      </div>
       <h2 ref={headingRef} tabIndex={-1} className="mt-1 text-2xl font-bold outline-none">
         {current.title}
       </h2>
@@ -193,7 +231,27 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
           (estimate ? (
             <ResultView estimate={estimate} firmName={firmName} updating={updating} />
           ) : (
-            <p role="status">{project ? 'Working out your range…' : 'Some answers need another look before we can work out a range.'}</p>
+            <div role="status" className="space-y-3" data-testid="result-status">
+              {liveState.kind === 'waiting' ? (
+                <>
+                  <p>Your range is waiting for {liveState.what}.</p>
+                  <button type="button" className="button-quiet" onClick={() => goToAnswer(Object.keys(blockingErrors))}>
+                    Go to that answer
+                  </button>
+                </>
+              ) : liveState.kind === 'failed' ? (
+                <>
+                  <p>{liveState.error.message}</p>
+                  {liveState.error.retryable && (
+                    <button type="button" className="button-quiet" onClick={retry}>
+                      Try again
+                    </button>
+                  )}
+                </>
+              ) : (
+                <p>Working out your range…</p>
+              )}
+            </div>
           ))}
         {current.id === 'contact' && (
           <>
@@ -201,53 +259,58 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
             <Suspense fallback={<p role="status">Getting the form ready…</p>}>
               <ContactStep firmName={firmName} sending={sending} serverErrors={sendError?.fields ?? {}} onSubmit={send} />
             </Suspense>
-            {sendError && (
-              <p role="alert" className="field-error mt-3">
-                {sendError.status === 400 && Object.keys(sendError.fields).some((k) => !k.startsWith('contact.'))
-                  ? 'Some earlier answers need another look. '
-                  : ''}
-                {sendError.message}
-              </p>
-            )}
+            {sendError && <SendProblem error={sendError} context={waitingContext} onGoToAnswer={goToAnswer} />}
           </>
         )}
       </div>
 
       {showErrors && stepHasErrors && (
         <p role="alert" className="field-error mt-4">
-          Some answers on this step need another look.
+          Some answers on this step need another look{stepWaiting ? `: ${stepWaiting}` : ''}.
         </p>
       )}
 
-      <nav className="mt-6 flex gap-3" aria-label="Steps">
-        {step > 0 && (
-          <button type="button" className="button-quiet flex-1" onClick={() => setStep(step - 1)}>
-            Back
-          </button>
+      {/* The range and the step's main action together: at the foot of the frame when it is as tall
+          as its content, held at the foot of the screen when the frame scrolls (floating panel, direct visit). */}
+      <div className="sticky bottom-0 -mx-4 mt-6 border-t border-slate/30 bg-paper/95 px-4 py-3">
+        {current.id !== 'result' && (
+          <p className="mb-2 text-center" aria-live="polite" data-testid="live-range">
+            <LiveRange state={liveState} onRetry={retry} />
+          </p>
         )}
-        {current.id !== 'contact' && (
-          <button
-            type="button"
-            className="flex-1 rounded-md bg-[var(--brand)] px-4 py-2 font-medium text-[var(--brand-text)] disabled:opacity-60"
-            disabled={current.id === 'photos' && photosBusy}
-            onClick={next}
-          >
-            {current.id === 'photos' && photosBusy ? 'Photos still uploading…' : current.id === 'result' ? `Send it to ${firmName}` : 'Next'}
-          </button>
-        )}
-      </nav>
-
-      {current.id !== 'result' && (
-        <div className="fixed inset-x-0 bottom-0 border-t border-slate/30 bg-paper/95 px-4 py-3 text-center" aria-live="polite" data-testid="live-range">
-          {estimate ? (
-            <>
-              <span className="text-sm text-slate">Price range so far: </span>
-              <span className="figures text-lg font-bold">{estimate.range.text}</span>
-            </>
-          ) : (
-            <span className="text-sm text-slate">{live.isLoading ? 'Working out your range…' : 'Your range appears here as you answer.'}</span>
+        <nav className="flex gap-3" aria-label="Steps">
+          {step > 0 && (
+            <button type="button" className="button-quiet flex-1" onClick={() => setStep(step - 1)}>
+              Back
+            </button>
           )}
-        </div>
+          {current.id !== 'contact' && (
+            <button
+              type="button"
+              className="flex-1 rounded-md bg-[var(--brand)] px-4 py-2 font-medium text-[var(--brand-text)] disabled:opacity-60"
+              disabled={current.id === 'photos' && photosBusy}
+              onClick={next}
+            >
+              {current.id === 'photos' && photosBusy ? 'Photos still uploading…' : current.id === 'result' ? `Send it to ${firmName}` : 'Next'}
+            </button>
+          )}
+        </nav>
+      </div>
+    </div>
+  );
+}
+
+/** Why Send failed, in words the homeowner can act on; earlier answers are named and one tap away. */
+function SendProblem({ error, context, onGoToAnswer }: { error: ApiError; context: WaitingContext; onGoToAnswer: (paths: string[]) => void }) {
+  const earlier = Object.keys(error.fields).filter((k) => !k.startsWith('contact.') && k !== 'website');
+  const what = waitingFor(Object.fromEntries(earlier.map((k) => [k, error.fields[k]!])), context);
+  return (
+    <div role="alert" className="mt-3 space-y-2">
+      <p className="field-error">{what ? `One of the earlier answers needs another look: ${what}.` : error.message}</p>
+      {what && (
+        <button type="button" className="button-quiet" onClick={() => onGoToAnswer(earlier)}>
+          Go to that answer
+        </button>
       )}
     </div>
   );
