@@ -4,7 +4,8 @@ import type { Units } from '~/lib/estimate/index.ts';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ApiError, fetchEstimate, sendLead, type SentLead } from './api';
 import { LiveRange, type LiveRangeState } from './LiveRange';
-import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
+import { newDraft, newKey, newRoom, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from './draft';
+import { chooseFormToken, clearDraft, loadDraft, rekey, saveDraft, tabStorage, type SavedPhoto } from './draft-storage';
 import { OptionsStep } from './OptionsStep';
 import { ResultView } from './ResultView';
 import { RoomsStep } from './RoomsStep';
@@ -28,6 +29,8 @@ export type PriceWidgetProps = {
   treatments: OfferedTreatment[];
   /** The page that embeds us, already checked against the firm's allowed sites; null when opened directly. */
   hostOrigin: string | null;
+  /** How long a form token is good for, so a draft restored after a reload can keep its own. */
+  formTokenTtlMs?: number;
 };
 
 const STEPS = [
@@ -48,31 +51,94 @@ function useDebounced<T>(value: T, ms: number): T {
   return current;
 }
 
-/** Tells the embedding page how tall we are, so its iframe never scrolls. */
-function useReportHeight(hostOrigin: string | null) {
+/**
+ * Tells the embedding page how tall our content is, so its iframe neither scrolls nor leaves blank
+ * space. The content box is measured, not the document: the document's scrollHeight is never less
+ * than the frame itself, so the frame could grow but never shrink (docs/sources.md §62).
+ */
+function useReportHeight(hostOrigin: string | null, content: React.RefObject<HTMLDivElement | null>, view: string) {
   useEffect(() => {
-    if (!hostOrigin || window.parent === window) return;
-    const report = () => window.parent.postMessage({ type: 'lapwing:height', height: Math.ceil(document.documentElement.scrollHeight) }, hostOrigin);
+    const element = content.current;
+    if (!hostOrigin || window.parent === window || !element) return;
+    let last = -1;
+    const report = () => {
+      const height = Math.ceil(element.getBoundingClientRect().height);
+      if (height === last) return;
+      last = height;
+      window.parent.postMessage({ type: 'lapwing:height', height }, hostOrigin);
+    };
     const observer = new ResizeObserver(report);
-    observer.observe(document.body);
+    observer.observe(element);
     report();
     return () => observer.disconnect();
-  }, [hostOrigin]);
+    // A new view may be a new element: observe again.
+  }, [hostOrigin, content, view]);
 }
 
-export default function PriceWidget({ slug, formToken, firmName, firmPhone = null, units, treatments, hostOrigin }: PriceWidgetProps) {
+/** Tells the embedding page a new step began, so it can bring the frame's top into view. */
+function useReportStep(hostOrigin: string | null, stepKey: string) {
+  const first = useRef(true);
+  useEffect(() => {
+    if (first.current) {
+      first.current = false;
+      return;
+    }
+    if (hostOrigin && window.parent !== window) window.parent.postMessage({ type: 'lapwing:step' }, hostOrigin);
+  }, [hostOrigin, stepKey]);
+}
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+export default function PriceWidget({
+  slug,
+  formToken: freshToken,
+  firmName,
+  firmPhone = null,
+  units,
+  treatments,
+  hostOrigin,
+  formTokenTtlMs = DAY_MS,
+}: PriceWidgetProps) {
   const [draft, setDraft] = useState<Draft>(() => ({ ...newDraft(units), treatmentId: treatments.length === 1 ? treatments[0]!.id : null }));
   const [step, setStep] = useState(0);
-  const [photos, setPhotos] = useState<{ id: string; thumbnailUrl: string }[]>([]);
+  const [photos, setPhotos] = useState<SavedPhoto[]>([]);
   const [photosBusy, setPhotosBusy] = useState(false);
   const [showErrors, setShowErrors] = useState(false);
   const [sending, setSending] = useState(false);
   const [sendError, setSendError] = useState<ApiError | null>(null);
   const [sent, setSent] = useState<SentLead | null>(null);
-  // One key per widget visit: a double tap or a retried send makes one lead.
-  const idempotencyKey = useMemo(() => crypto.randomUUID(), []);
+  const [formToken, setFormToken] = useState(freshToken);
+  // One key per widget visit (kept across a reload): a double tap or a retried send makes one lead.
+  const [idempotencyKey, setIdempotencyKey] = useState(() => crypto.randomUUID());
+  // False until the saved draft (if any) is back: saving before that would overwrite it.
+  const [restored, setRestored] = useState(false);
   const headingRef = useRef<HTMLHeadingElement>(null);
-  useReportHeight(hostOrigin);
+  const contentRef = useRef<HTMLDivElement>(null);
+  useReportHeight(hostOrigin, contentRef, sent ? 'sent' : 'steps');
+  useReportStep(hostOrigin, sent ? 'sent' : String(step));
+
+  // Restored after the first render (the server rendered a fresh form), never during it.
+  useEffect(() => {
+    const saved = loadDraft(tabStorage(), slug, units);
+    if (saved) {
+      const token = chooseFormToken(saved.formToken, freshToken, formTokenTtlMs);
+      const back = rekey(saved.draft, newKey) as Partial<Draft> & { rooms: Partial<Draft['rooms'][number]>[] };
+      setDraft({ ...newDraft(units), ...back, rooms: back.rooms.map((room) => ({ ...newRoom(units), ...room })) } as Draft);
+      setStep(Math.min(Math.max(saved.step, 0), STEPS.length - 1));
+      setFormToken(token.formToken);
+      // Photos belong to the token they were uploaded under; with a new token they are not the draft's.
+      if (token.kept) setPhotos(saved.photos);
+      if (token.kept && saved.idempotencyKey) setIdempotencyKey(saved.idempotencyKey);
+    }
+    setRestored(true);
+    // Once, on arrival.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
+
+  useEffect(() => {
+    if (!restored || sent) return;
+    saveDraft(tabStorage(), { slug, units, formToken, step, draft, photos, idempotencyKey });
+  }, [restored, sent, slug, units, formToken, step, draft, photos, idempotencyKey]);
 
   const { project, errors: localErrors } = useMemo(() => toProject(draft, units), [draft, units]);
   const latestKey = project ? JSON.stringify({ project, photos: photos.length }) : null;
@@ -106,6 +172,16 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
           ? { kind: 'working' }
           : { kind: 'empty' };
   const retry = () => void live.mutate();
+
+  // A restored token the server no longer takes: go on with this page's own (its photos stay behind).
+  const tokenRefused = Boolean(liveError?.fields.formToken ?? sendError?.fields.formToken);
+  useEffect(() => {
+    if (tokenRefused && formToken !== freshToken) {
+      setFormToken(freshToken);
+      setPhotos([]);
+      setSendError(null);
+    }
+  }, [tokenRefused, formToken, freshToken]);
 
   useEffect(() => {
     headingRef.current?.focus();
@@ -150,6 +226,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
     setSendError(null);
     try {
       setSent(await sendLead(slug, { formToken, idempotencyKey, project, contact, website }));
+      clearDraft(tabStorage(), slug);
     } catch (error) {
       setSendError(error instanceof ApiError ? error : new ApiError('Something went wrong. Please try again.', 0));
     } finally {
@@ -159,7 +236,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
 
   if (sent) {
     return (
-      <div className="mx-auto max-w-xl space-y-4 p-4">
+      <div ref={contentRef} className="mx-auto max-w-xl space-y-4 p-4" data-testid="thank-you">
         <h2 ref={headingRef} tabIndex={-1} className="text-2xl font-bold outline-none">
           Thank you — it's on its way to {firmName}
         </h2>
@@ -191,7 +268,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
 
   const visibleErrors = showErrors ? errors : serverErrors;
   return (
-    <div className="mx-auto max-w-xl p-4 pb-0">
+    <div ref={contentRef} className="mx-auto max-w-xl p-4 pb-0">
       <div className="flex flex-wrap items-baseline justify-between gap-x-3 text-sm text-slate">
         <p>
           Step {step + 1} of {STEPS.length}
@@ -223,7 +300,7 @@ export default function PriceWidget({ slug, formToken, firmName, firmPhone = nul
           <div className="space-y-3">
             <p className="text-slate">Photos of the walls help {firmName} give you a tighter range. Up to 10, optional.</p>
             <Suspense fallback={<p role="status">Getting the photo picker ready…</p>}>
-              <PhotoPicker slug={slug} formToken={formToken} onChange={setPhotos} onBusyChange={setPhotosBusy} />
+              <PhotoPicker key={formToken} slug={slug} formToken={formToken} initial={photos} onChange={setPhotos} onBusyChange={setPhotosBusy} />
             </Suspense>
           </div>
         )}
