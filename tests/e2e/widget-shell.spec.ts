@@ -109,6 +109,7 @@ test('on a 375 × 740 phone the range is on screen at every step, and after Send
   const frame = page.locator('iframe[title="Price your walls"]');
   // The homeowner scrolls down to the widget.
   await frame.evaluate((element) => element.scrollIntoView({ block: 'start' }));
+  expect(await isOnScreen(page, widget, 'live-range-top'), 'range on screen, rooms step').toBe(true);
   await describeOneRoom(widget);
   await chooseTreatment(widget);
   await expect(widget.getByTestId('live-range')).toContainText('$', { timeout: 10_000 });
@@ -132,8 +133,8 @@ test('on a 375 × 740 phone the range is on screen at every step, and after Send
   await expect(widget.getByRole('heading', { name: 'Your details' })).toBeVisible();
   expect(await isOnScreen(page, widget, 'live-range-top'), 'range on screen, details form').toBe(true);
 
-  const tallest = (await frame.boundingBox())!.height;
   await widget.getByRole('textbox', { name: 'Your name', exact: true }).fill('Rowan Teale');
+  const tallest = (await frame.boundingBox())!.height;
   await widget.getByRole('textbox', { name: 'E-mail', exact: true }).fill(`rowan-${Date.now()}@example.test`);
   await widget.getByRole('textbox', { name: 'Phone', exact: true }).fill('(512) 555-0163');
   await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('27 Quarry Bend');
@@ -201,4 +202,35 @@ test('a reload mid-way keeps the answers, the step and the photos, and the inqui
   await page.reload();
   await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
   await expect(widget.getByLabel('Which room?').first()).not.toHaveValue('Den');
+});
+
+test('a refused Send names the earlier answer once and leads back to it', async ({ page }) => {
+  const widget = await openOnDemoSite(page, { width: 1000, height: 900 });
+  await describeOneRoom(widget);
+  await chooseTreatment(widget);
+  await expect(widget.getByTestId('live-range')).toContainText('$', { timeout: 10_000 });
+  for (let i = 0; i < 2; i++) await widget.getByRole('button', { name: 'Next' }).click();
+  await widget.getByText('Not sure', { exact: true }).click();
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await widget.getByRole('button', { name: /Send it to/ }).click();
+  await page.route('**/api/embed/*/leads', (route) =>
+    route.fulfill({
+      status: 400,
+      contentType: 'application/json',
+      body: JSON.stringify({ error: 'Some of the answers need another look.', fields: { 'project.rooms.0.length': 'Room length must be at most 100 ft.' } }),
+    }),
+  );
+  await widget.getByRole('textbox', { name: 'Your name', exact: true }).fill('Tam Oduya');
+  await widget.getByRole('textbox', { name: 'E-mail', exact: true }).fill('tam@example.test');
+  await widget.getByRole('textbox', { name: 'Phone', exact: true }).fill('(512) 555-0190');
+  await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('3 Alder Yard');
+  await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
+  await widget.getByLabel(/may contact me/).check();
+  await widget.getByRole('button', { name: /Send to/ }).click();
+  const alert = widget.getByRole('alert').filter({ hasText: 'earlier answers' });
+  await expect(alert).toHaveText(/One of the earlier answers needs another look: the room length\.\s*Go to that answer/);
+  await alert.getByRole('button', { name: 'Go to that answer' }).click();
+  await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible();
+  await expect(widget.getByText('Room length must be at most 100 ft.')).toBeVisible();
 });

@@ -153,7 +153,10 @@ export default function PriceWidget({
   const serverErrors = liveError ? normaliseServerErrors(liveError.fields) : {};
   // What stops the range (unanswered questions do not: the range is priced cautiously until then).
   const blockingErrors = { ...serverErrors, ...localErrors };
-  const errors = { ...blockingErrors, ...unansweredQuestions(draft) };
+  // What Send was refused for on earlier steps, shown beside those answers until they change.
+  const [refusedAnswers, setRefusedAnswers] = useState<{ draft: Draft; fields: Record<string, string> } | null>(null);
+  const sendFieldErrors = refusedAnswers?.draft === draft ? refusedAnswers.fields : {};
+  const errors = { ...sendFieldErrors, ...blockingErrors, ...unansweredQuestions(draft) };
   const estimate = project && !liveError ? live.data : undefined;
   // Shown dimmed while the answers on screen are newer than the range.
   const updating = latestKey !== requestKey || live.isValidating;
@@ -228,7 +231,10 @@ export default function PriceWidget({
       setSent(await sendLead(slug, { formToken, idempotencyKey, project, contact, website }));
       clearDraft(tabStorage(), slug);
     } catch (error) {
-      setSendError(error instanceof ApiError ? error : new ApiError('Something went wrong. Please try again.', 0));
+      const failure = error instanceof ApiError ? error : new ApiError('Something went wrong. Please try again.', 0);
+      setSendError(failure);
+      const earlier = Object.entries(failure.fields).filter(([path]) => path.startsWith('project.'));
+      setRefusedAnswers(earlier.length ? { draft, fields: normaliseServerErrors(Object.fromEntries(earlier)) } : null);
     } finally {
       setSending(false);
     }
@@ -266,7 +272,7 @@ export default function PriceWidget({
     );
   }
 
-  const visibleErrors = showErrors ? errors : serverErrors;
+  const visibleErrors = showErrors ? errors : { ...sendFieldErrors, ...serverErrors };
   return (
     <div ref={contentRef} className="mx-auto max-w-xl p-4 pb-0">
       <div className="flex flex-wrap items-baseline justify-between gap-x-3 text-sm text-slate">
