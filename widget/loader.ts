@@ -42,12 +42,21 @@ function textOnColour(hex: string): string {
     frame.setAttribute('allow', 'camera');
     frame.style.cssText = 'width:100%;border:0;display:block;color-scheme:light;';
     frame.style.height = floating ? '100%' : '640px';
-    // Only our own iframe, from our own origin, may set the height.
+    // Only our own iframe, from our own origin, may set the height or move the page.
     window.addEventListener('message', (event) => {
-      if (event.origin !== origin || event.source !== frame.contentWindow) return;
+      if (event.origin !== origin || event.source !== frame.contentWindow || floating) return;
       const data = event.data as { type?: string; height?: number } | null;
-      if (!floating && data?.type === 'lapwing:height' && typeof data.height === 'number') {
-        frame.style.height = `${Math.min(Math.max(data.height, 240), 8000)}px`;
+      if (data?.type === 'lapwing:height' && typeof data.height === 'number' && Number.isFinite(data.height)) {
+        // The frame grows and shrinks with its content; its top stays where it was on screen, so
+        // the host page's own content does not jump when a step gets shorter.
+        const topBefore = frame.getBoundingClientRect().top;
+        frame.style.height = `${Math.round(Math.min(Math.max(data.height, 240), 8000))}px`;
+        const moved = frame.getBoundingClientRect().top - topBefore;
+        if (Math.abs(moved) >= 1) window.scrollBy(0, moved);
+      } else if (data?.type === 'lapwing:step') {
+        // A new step starts at its top: bring the frame's top into view, only if it is out of view.
+        const top = frame.getBoundingClientRect().top;
+        if (top < 0 || top > window.innerHeight - 80) frame.scrollIntoView({ block: 'start' });
       }
     });
     return frame;

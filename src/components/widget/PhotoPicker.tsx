@@ -5,7 +5,7 @@ import { completeUpload, OFFLINE_MESSAGE, removeUpload, requestUpload } from '~/
 import { shrinkPhoto } from '~/components/widget/photos/shrink-photo';
 import { uploadWithProgress } from '~/components/widget/photos/upload-with-progress';
 
-export type PickedPhoto = { id: string; thumbnailUrl: string };
+export type PickedPhoto = { id: string; thumbnailUrl: string; name: string };
 
 type Props = {
   slug: string;
@@ -14,6 +14,8 @@ type Props = {
   onChange: (photos: PickedPhoto[]) => void;
   /** True while any photo is still being prepared, sent, checked or removed (e.g. to hold the send button). */
   onBusyChange?: (busy: boolean) => void;
+  /** Photos already checked (kept across a reload or a return to this step), listed as added. */
+  initial?: PickedPhoto[];
 };
 
 type Step = 'waiting' | 'preparing' | 'uploading' | 'checking' | 'ready' | 'refused' | 'failed' | 'removing';
@@ -69,13 +71,25 @@ let nextKey = 0;
  * straight to storage with its own progress bar, then checked by the server. Refused photos say
  * why, interrupted ones can be tried again, and any photo can be removed before the form is sent.
  */
-export default function PhotoPicker({ slug, formToken, onChange, onBusyChange }: Props) {
-  const [items, setItems] = useState<Item[]>([]);
+/** List items and upload records for photos that are already on the server, so they can be removed like new ones. */
+function seed(initial: PickedPhoto[]): { items: Item[]; jobs: Map<string, Job> } {
+  const jobs = new Map<string, Job>();
+  const items = initial.map((photo): Item => {
+    const key = `photo-${nextKey++}`;
+    jobs.set(key, { file: new File([], photo.name), blob: null, photoId: photo.id, uploaded: true, abort: null, removed: false });
+    return { key, name: photo.name, step: 'ready', progress: 1, previewUrl: null, photoId: photo.id, thumbnailUrl: photo.thumbnailUrl, message: null };
+  });
+  return { items, jobs };
+}
+
+export default function PhotoPicker({ slug, formToken, onChange, onBusyChange, initial = [] }: Props) {
+  const [seeded] = useState(() => seed(initial));
+  const [items, setItems] = useState<Item[]>(seeded.items);
   const [notices, setNotices] = useState<string[]>([]);
   const [announcement, setAnnouncement] = useState('');
   const itemsRef = useRef(items);
   itemsRef.current = items;
-  const jobs = useRef(new Map<string, Job>());
+  const jobs = useRef(seeded.jobs);
   const queue = useRef<Promise<void>>(Promise.resolve());
   const hintId = useId();
 
@@ -229,7 +243,7 @@ export default function PhotoPicker({ slug, formToken, onChange, onBusyChange }:
   const ready = items.filter((item) => item.step === 'ready' && item.photoId && item.thumbnailUrl);
   const readySignature = ready.map((item) => item.photoId).join(',');
   useEffect(() => {
-    onChangeRef.current(ready.map((item) => ({ id: item.photoId!, thumbnailUrl: item.thumbnailUrl! })));
+    onChangeRef.current(ready.map((item) => ({ id: item.photoId!, thumbnailUrl: item.thumbnailUrl!, name: item.name })));
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [readySignature]);
 

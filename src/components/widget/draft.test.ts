@@ -9,10 +9,11 @@ import {
   placeForMe,
   toProject,
   unansweredQuestions,
-  waitingFor,
+  draftWaitingContext,
   type Draft,
 } from './draft';
 import { fitProblem } from './wall-fit';
+import { waitingFor } from './waiting-for';
 import { estimate, sampleRateBook } from '~/lib/estimate/index.ts';
 
 describe('the "built before 1978" question', () => {
@@ -269,11 +270,11 @@ describe('what the live range is waiting for', () => {
     draft.rooms[0]!.width = "4'";
     draft.rooms[0]!.roomWalls[1] = { ...draft.rooms[0]!.roomWalls[1], doors: 1, windows: 1 };
     const errors = { 'project.treatment': 'Choose a finish.', ...toProject(draft, 'imperial').errors };
-    expect(waitingFor(errors, draft, 'imperial')).toBe('Waiting for Short wall 1 in the Bathroom: what is on it does not fit.');
+    expect(waitingFor(errors, draftWaitingContext(draft, 'imperial'))).toBe('the door and window on Short wall 1');
   });
   it('names a missing size by room, and says nothing when all is answered', () => {
     const draft = { ...newDraft('imperial'), treatmentId: 'shiplap', wainscotHeight: '36"' };
-    expect(waitingFor(toProject(draft, 'imperial').errors, draft, 'imperial')).toBe('Waiting for the ceiling height of the Room 1.');
-    expect(waitingFor(toProject(bathroom(), 'imperial').errors, bathroom(), 'imperial')).toBeNull();
+    expect(waitingFor(toProject(draft, 'imperial').errors, draftWaitingContext(draft, 'imperial'))).toBe('the ceiling height');
+    expect(waitingFor(toProject(bathroom(), 'imperial').errors, draftWaitingContext(bathroom(), 'imperial'))).toBeNull();
   });
 });

@@ -12,6 +12,7 @@ import type { FixtureKind, ProjectInput } from '~/lib/estimate/schemas.ts';
 import { parseLength, type Units } from '~/lib/estimate/units.ts';
 import { listedWallNames, roomWallNames, ROOM_SIDES } from '~/lib/shared/wall-names.ts';
 import { contentsWidth, fitProblem, fits, type WallContents } from './wall-fit';
+import type { WaitingContext } from './waiting-for';
 
 export type SizeMode = 'room' | 'walls';
 
@@ -438,36 +439,21 @@ export function normaliseServerErrors(fields: FieldErrors, origin?: ProjectOrigi
 }
 
 /**
- * What the live range is waiting for, in the homeowner's words ("the Bathroom's Short wall 1: the
- * door and window do not fit"), or null when nothing on the rooms or finish steps is missing. For
- * the live bar, so it never sits on "Your range appears here" without saying why.
+ * The rooms and walls as the homeowner sees them, for waiting-for.ts to name what the live range
+ * waits for ("the door on Short wall 1 (Bathroom)").
  */
-export function waitingFor(errors: FieldErrors, draft: Draft, units: Units): string | null {
-  const roomName = (r: number) => draft.rooms[r]?.name.trim() || `Room ${r + 1}`;
-  const entries = Object.entries(errors).filter(([path]) => fieldStep(path) === 'rooms' || fieldStep(path) === 'treatment');
-  // A wall that cannot hold its items first: it is the answer most likely to be missed.
-  entries.sort(([a], [b]) => Number(!/\.walls\.\d+\.(openings|fixtures)/.test(a)) - Number(!/\.walls\.\d+\.(openings|fixtures)/.test(b)));
-  const first = entries[0];
-  if (!first) return null;
-  const [path] = first;
-  const wall = /^project\.rooms\.(\d+)\.walls\.(\d+)\.(openings|fixtures)/.exec(path);
-  if (wall) {
-    const r = Number(wall[1]);
-    const view = draft.rooms[r] ? roomWalls(draft.rooms[r]!, units)[Number(wall[2])] : undefined;
-    return `Waiting for ${view?.name ?? 'a wall'} in the ${roomName(r)}: what is on it does not fit.`;
-  }
-  const field = /^project\.rooms\.(\d+)\.(length|width|ceilingHeight|walls|placement|finish|accent)/.exec(path);
-  const words: Record<string, string> = {
-    length: 'the room length',
-    width: 'the room width',
-    ceilingHeight: 'the ceiling height',
-    walls: 'the walls to cover',
-    placement: 'a wall for each door and window',
-    finish: 'its finish',
-    accent: 'its accent wall',
+export function draftWaitingContext(draft: Draft, units: Units): WaitingContext {
+  return {
+    rooms: draft.rooms.map((room) => ({
+      name: room.name,
+      walls: roomWalls(room, units).map((view) => ({
+        label: view.name,
+        openings: [
+          { kind: 'door', count: room.placement === 'auto' ? room.counts.doors : view.wall.doors },
+          { kind: 'window', count: room.placement === 'auto' ? room.counts.windows : view.wall.windows },
+        ].filter((o) => o.count > 0),
+        fixtures: (room.placement === 'auto' ? room.counts.fixtures : view.wall.fixtures).map((kind) => ({ kind })),
+      })),
+    })),
   };
-  if (field) return `Waiting for ${words[field[2]!]} of the ${roomName(Number(field[1]))}.`;
-  if (path === 'project.treatment') return 'Waiting for a finish.';
-  if (path === 'project.wainscotHeight') return 'Waiting for the height of the cap rail.';
-  return 'Waiting for an answer on this page.';
 }
