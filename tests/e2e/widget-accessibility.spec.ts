@@ -48,6 +48,17 @@ for (const brand of brands)
     await page.goto(`/embed/${await brand.slug()}`);
     await expect(page.locator('astro-island')).not.toHaveAttribute('ssr');
     await expectNoViolations(page, 'rooms');
+    // The "inches or feet?" question and a refused Next (focus on the field, message tied to it) pass too.
+    await page.getByRole('textbox', { name: 'Room length' }).fill('12');
+    await expect(page.getByRole('button', { name: '12 ft', exact: true })).toBeVisible();
+    await expectNoViolations(page, 'rooms, asking inches or feet');
+    await page.getByRole('button', { name: '12 ft', exact: true }).click();
+    await page.getByRole('textbox', { name: 'Ceiling height' }).fill('');
+    await page.getByRole('button', { name: 'Next' }).click();
+    await expect(page.getByRole('textbox', { name: 'Ceiling height' })).toBeFocused();
+    await expectNoViolations(page, 'rooms, with a field to fix');
+    await page.getByRole('textbox', { name: 'Room width' }).fill('10 ft');
+    await page.getByRole('textbox', { name: 'Ceiling height' }).fill('8 ft');
     // Nothing is wider than the phone.
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(320);
 
@@ -85,6 +96,7 @@ for (const brand of brands)
     await expect(page.getByRole('button', { name: /Send to/ })).toHaveCSS('color', brand.text);
     await page.getByRole('button', { name: /Send to/ }).click();
     await expect(page.getByText('Your name is required.')).toBeVisible();
+    await expect(page.getByLabel('Your name')).toBeFocused();
     await expectNoViolations(page, 'contact, with errors showing');
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(320);
   });
