@@ -41,9 +41,11 @@ test('a room’s walls are drawn to one scale with labels readable on a 320 px p
   await widget.getByLabel('Which room?').first().fill('Bathroom');
   await widget.getByRole('textbox', { name: 'Room length' }).fill("8'");
   await widget.getByRole('textbox', { name: 'Room width' }).fill("5'");
+  await widget.getByRole('textbox', { name: 'Ceiling height' }).fill("8'");
   await widget.getByRole('button', { name: 'Next' }).click();
   await expect(widget.getByRole('heading', { name: 'Treatment and height' })).toBeVisible();
   await widget.getByText('Board and batten').click();
+  await widget.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('36"');
   await widget.getByRole('button', { name: 'Next' }).click();
   await expect(widget.getByRole('heading', { name: 'A few details' })).toBeVisible();
   await widget.getByText('Not sure', { exact: true }).click();

@@ -53,6 +53,7 @@ for (const brand of brands)
     await expect(page.getByRole('button', { name: '12 ft', exact: true })).toBeVisible();
     await expectNoViolations(page, 'rooms, asking inches or feet');
     await page.getByRole('button', { name: '12 ft', exact: true }).click();
+    await page.getByRole('textbox', { name: 'Room width' }).fill('10 ft');
     await page.getByRole('textbox', { name: 'Ceiling height' }).fill('');
     await page.getByRole('button', { name: 'Next' }).click();
     await expect(page.getByRole('textbox', { name: 'Ceiling height' })).toBeFocused();

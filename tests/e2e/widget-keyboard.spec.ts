@@ -52,7 +52,7 @@ test('by keyboard alone, every card choice shows a focus ring on its card, and i
   }
   // The height cards, next in Tab order.
   const heightCards = page.getByRole('group', { name: 'How high?' }).locator('.choice-card');
-  await tabInto(page, heightCards);
+  await tabInto(page, page.getByRole('group', { name: 'How high?' }));
   await expect(heightCards.first()).toHaveCSS('outline-style', 'solid');
 
   // A mouse click picks a card without drawing the keyboard ring.
@@ -79,6 +79,7 @@ test('a length field says how it was read, asks inches or feet for a bare 12, an
   await expect(page.getByText('Inches or feet?')).toHaveCount(0);
 
   // Next with a field left empty: focus lands on it, its message is tied to it, and a summary is announced.
+  await page.getByRole('textbox', { name: 'Room width' }).fill('10 ft');
   await page.getByRole('textbox', { name: 'Ceiling height' }).fill('');
   await page.getByRole('button', { name: 'Next' }).click();
   await expect(page.getByRole('textbox', { name: 'Ceiling height' })).toBeFocused();
@@ -90,7 +91,7 @@ test('a length field says how it was read, asks inches or feet for a bare 12, an
   await page.getByRole('button', { name: 'Next' }).click();
 
   // Source: the core's limit for a wainscot is 96 in, which is 8 ft (1 ft = 12 in, NIST SP 811).
-  await page.getByRole('radio').first().check();
+  await page.getByRole('group', { name: 'What would you like on the walls?' }).locator('.choice-card').first().click();
   await page.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('10 ft');
   await expect(page.getByText('Wainscot height must be at most 8 ft.')).toBeVisible({ timeout: 5_000 });
   await expect(page.getByText(/at most 96 in/)).toHaveCount(0);
@@ -99,20 +100,21 @@ test('a length field says how it was read, asks inches or feet for a bare 12, an
 test('counters say their item, and the photo input has a name', async ({ page }) => {
   await page.goto('/embed/cedar-hollow');
   await expect(page.locator('astro-island')).not.toHaveAttribute('ssr');
-  const windows = page.getByRole('group', { name: 'Windows' });
+  const windows = page.getByRole('group', { name: 'Windows in room 1', exact: true });
   const before = Number(await windows.locator('output [aria-hidden="true"]').textContent());
   await windows.getByRole('button', { name: 'More windows' }).click();
   const after = before + 1;
   await expect(windows.locator('output')).toHaveAttribute('aria-live', 'polite');
-  await expect(windows.locator('output .sr-only')).toHaveText(`${after} ${after === 1 ? 'window' : 'windows'}`);
+  await expect(windows.locator('output .sr-only')).toHaveText(`${after} ${after === 1 ? 'window' : 'windows'} in room 1`);
   await windows.getByRole('button', { name: 'More windows' }).click();
-  await expect(windows.locator('output .sr-only')).toHaveText(`${after + 1} windows`);
+  await expect(windows.locator('output .sr-only')).toHaveText(`${after + 1} windows in room 1`);
 
   await page.getByRole('textbox', { name: 'Room length' }).fill('14 ft');
   await page.getByRole('textbox', { name: 'Room width' }).fill('12 ft');
   await page.getByRole('textbox', { name: 'Ceiling height' }).fill('8 ft');
   await page.getByRole('button', { name: 'Next' }).click();
-  await page.getByRole('radio').first().check();
+  await page.getByRole('group', { name: 'What would you like on the walls?' }).locator('.choice-card').first().click();
+  await page.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('36"');
   await page.getByRole('button', { name: 'Next' }).click();
   await page.getByText('Not sure', { exact: true }).click();
   await page.getByRole('button', { name: 'Next' }).click();

@@ -28,6 +28,8 @@ async function chooseTreatment(widget: FrameLocator) {
   await widget.getByRole('button', { name: 'Next' }).click();
   await expect(widget.getByRole('heading', { name: 'Treatment and height' })).toBeVisible();
   await widget.getByText('Board and batten').first().click();
+  // Fields start empty: the cap-rail height is typed like every other answer.
+  await widget.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('36"');
 }
 
 /** Where a widget element sits on the host page's screen (Playwright gives boxes in the top page's viewport). */
@@ -111,9 +113,12 @@ test('on a 375 × 740 phone the range is on screen at every step, and after Send
   await frame.evaluate((element) => element.scrollIntoView({ block: 'start' }));
   expect(await isOnScreen(page, widget, 'live-range-top'), 'range on screen, rooms step').toBe(true);
   await describeOneRoom(widget);
-  await chooseTreatment(widget);
-  await expect(widget.getByTestId('live-range')).toContainText('$', { timeout: 10_000 });
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await expect(widget.getByRole('heading', { name: 'Treatment and height' })).toBeFocused();
   expect(await isOnScreen(page, widget, 'live-range-top'), 'range on screen, treatment step').toBe(true);
+  await widget.getByText('Board and batten').first().click();
+  await widget.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('36"');
+  await expect(widget.getByTestId('live-range')).toContainText('$', { timeout: 10_000 });
 
   // Scrolled to the foot of a step, the range sits beside Next.
   await widget.getByRole('button', { name: 'Next' }).scrollIntoViewIfNeeded();

@@ -1,3 +1,4 @@
+import '~/lib/shared/zod-in-browser';
 import { Suspense, lazy, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { Units } from '~/lib/estimate/index.ts';

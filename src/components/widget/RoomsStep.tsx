@@ -64,6 +64,8 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
         const withFixtures = offersFixtures(room);
         const placed = room.placement === 'auto' ? placeForMe(room, units) : null;
         const label = room.name.trim() || `Room ${r + 1}`;
+        // "in the Bathroom", but "in room 1" for a room not named yet.
+        const inRoom = room.name.trim() ? `in the ${room.name.trim()}` : `in room ${r + 1}`;
         return (
           <fieldset key={room.key} className="space-y-4 rounded-lg border border-slate/30 bg-white p-4" data-testid={`room-${r}`}>
             <legend className="px-1 text-base font-bold">Room {r + 1}</legend>
@@ -213,7 +215,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
 
             <fieldset className="space-y-3">
               <legend className="field-label">Doors, windows and outlets{withFixtures ? ', fixtures' : ''}</legend>
-              <div role="radiogroup" aria-label={`Where are they in the ${label}?`} className="grid grid-cols-2 gap-2">
+              <div role="radiogroup" aria-label={`Where are they ${inRoom}?`} className="grid grid-cols-2 gap-2">
                 {(['auto', 'by-wall'] as const).map((placement) => (
                   <label
                     key={placement}
@@ -232,7 +234,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
               </div>
               {placed ? (
                 <>
-                  <WallItemsEditor items={room.counts} withFixtures={withFixtures} where={`in the ${label}`} onChange={(counts) => update(r, { counts })} />
+                  <WallItemsEditor items={room.counts} withFixtures={withFixtures} where={inRoom} onChange={(counts) => update(r, { counts })} />
                   {placed.notes.length > 0 && (
                     <p className="text-sm text-slate" role="status" data-testid="placed-note">
                       Placed where they fit: {placed.notes.join('; ')}.

@@ -1,5 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { chooseFormToken, clearDraft, DRAFT_STORAGE_VERSION, draftStorageKey, formTokenIssuedAt, loadDraft, rekey, saveDraft, type SavedWidget } from './draft-storage';
+import {
+  chooseFormToken,
+  clearDraft,
+  DRAFT_STORAGE_VERSION,
+  draftStorageKey,
+  formTokenIssuedAt,
+  loadDraft,
+  rekey,
+  saveDraft,
+  type SavedWidget,
+} from './draft-storage';
 
 // Source: docs/sources.md §61 (WHATWG HTML, Web storage: a string store per origin and tab that
 // survives a reload; setItem may throw when the quota is used up; getItem gives null for a missing key).
@@ -85,7 +95,11 @@ describe('keeping the widget across a reload', () => {
     const storage = memoryStorage();
     storage.setItem(
       draftStorageKey('cedar-hollow'),
-      JSON.stringify({ version: DRAFT_STORAGE_VERSION, ...saved(), photos: [{ id: 'p1', name: 'a.jpg', thumbnailUrl: 'https://photos.test/a.jpg' }, { id: 3 }, 'x'] }),
+      JSON.stringify({
+        version: DRAFT_STORAGE_VERSION,
+        ...saved(),
+        photos: [{ id: 'p1', name: 'a.jpg', thumbnailUrl: 'https://photos.test/a.jpg' }, { id: 3 }, 'x'],
+      }),
     );
     expect(loadDraft(storage, 'cedar-hollow', 'imperial')?.photos).toEqual([{ id: 'p1', name: 'a.jpg', thumbnailUrl: 'https://photos.test/a.jpg' }]);
   });
