@@ -67,10 +67,12 @@ function splitOpenings(openings: Opening[], defaultCasing: number): { fixed: Pla
   const fixed: Placed[] = [];
   const loose: Loose[] = [];
   for (const o of openings) {
-    const size = { ...openingSize(o), casingWidth: o.casingWidth ?? defaultCasing };
+    // Objects written out in full rather than spread: this runs for every wall of every estimate.
+    const { width, height, sillHeight, assumed } = openingSize(o);
+    const casingWidth = o.casingWidth ?? defaultCasing;
     for (let i = 0; i < o.count; i++) {
-      if (o.offset !== undefined && o.count === 1) fixed.push({ kind: o.kind, offset: o.offset, ...size });
-      else loose.push({ kind: o.kind, ...size, assumed: true });
+      if (o.offset !== undefined && o.count === 1) fixed.push({ kind: o.kind, offset: o.offset, width, height, sillHeight, assumed, casingWidth });
+      else loose.push({ kind: o.kind, width, height, sillHeight, assumed: true, casingWidth });
     }
   }
   return { fixed, loose };
@@ -114,7 +116,7 @@ export function tryPlaceOpenings(openings: Opening[], wallLength: number, defaul
       continue;
     }
     const offset = cursor[i]! + gap(cursorCasing[i]!, c);
-    placed.push({ ...o, offset });
+    placed.push({ kind: o.kind, width: o.width, height: o.height, sillHeight: o.sillHeight, assumed: o.assumed, casingWidth: o.casingWidth, offset });
     cursor[i] = offset + o.width;
     cursorCasing[i] = c;
   }

@@ -111,9 +111,20 @@ function columnSlices(
   bottom = ctx.bandBottom,
   top = ctx.bandTop,
 ): Array<{ x0: number; x1: number; spans: Interval[] }> {
+  // Most columns meet no opening: one slice, the whole band (what the general path gives then).
+  if (
+    !ctx.openings.some(
+      (o) => overlap(o.offset, o.offset + o.width, x0, x1) > 0.01 || (o.offset > x0 && o.offset < x1) || (o.offset + o.width > x0 && o.offset + o.width < x1),
+    )
+  ) {
+    const colTop = ctx.rake ? rakedColumnTop(ctx.rake, x0, x1, top) : top;
+    return x1 - x0 >= 0.01 && colTop - bottom >= MIN_PIECE ? [{ x0, x1, spans: [[bottom, colTop]] }] : [];
+  }
   const edges = [x0, x1];
   for (const o of ctx.openings) {
-    for (const e of [o.offset, o.offset + o.width]) if (e > x0 + 0.01 && e < x1 - 0.01) edges.push(e);
+    if (o.offset > x0 + 0.01 && o.offset < x1 - 0.01) edges.push(o.offset);
+    const end = o.offset + o.width;
+    if (end > x0 + 0.01 && end < x1 - 0.01) edges.push(end);
   }
   edges.sort((a, b) => a - b);
   const out: Array<{ x0: number; x1: number; spans: Interval[] }> = [];
@@ -129,6 +140,8 @@ function columnSlices(
 
 /** The lengths to cut for one column: the union of its slices' stretches (a notched board is one board). */
 function columnCuts(slices: Array<{ spans: Interval[] }>): Interval[] {
+  // One slice: its stretches are already in order and apart (subtractIntervals).
+  if (slices.length === 1) return slices[0]!.spans.map(([a, b]) => [a, b]);
   const all = slices.flatMap((s) => s.spans).sort((a, b) => a[0] - b[0]);
   const merged: Array<[number, number]> = [];
   for (const [a, b] of all) {
@@ -161,11 +174,15 @@ interface RunPlan {
 function runPlan(t: Treatment, runLength: number, width: number, gap: number): RunPlan {
   if (t.layout === 'balanced') {
     const run = balancedRun(runLength, width, gap);
-    const positions = positionsOf(run, width, gap).map((p) => ({ ...p, ripped: p.width < width - 1e-6 }));
+    const positions = positionsOf(run, width, gap).map((p) => ({ start: p.start, width: p.width, ripped: p.width < width - 1e-6 }));
     return { layout: { count: run.count, lastWidth: run.endWidth, leftover: 0, firstWidth: run.endWidth }, positions };
   }
   const run = boardRun(runLength, width, gap);
-  const positions = boardPositions(runLength, width, gap).map((p, i) => ({ ...p, ripped: i === run.count - 1 && run.lastWidth < width - 1e-6 }));
+  const positions = boardPositions(runLength, width, gap).map((p, i) => ({
+    start: p.start,
+    width: p.width,
+    ripped: i === run.count - 1 && run.lastWidth < width - 1e-6,
+  }));
   return { layout: run, positions };
 }
 
