@@ -4,7 +4,8 @@
  * (proven: FFD ≤ 11/9·OPT + 6/9, Dósa 2007) and a sequential pattern heuristic (repeat the pattern
  * that wastes least, after Haessler's sequential heuristic procedure, within a node budget) — both
  * feasible, so the answer is never below the true optimum and never worse than FFD; and where that
- * stops above the lower bound, an exact search over the distinct lengths within a node budget.
+ * stops above the lower bound, an exact table over the "what is left" states when they are few
+ * enough, else an exact search over the distinct lengths within a node budget (docs/sources.md §50).
  */
 
 export const EXACT_LIMIT = 20;
@@ -18,10 +19,16 @@ const SEQUENTIAL_NODES = 500_000;
 // Node cap for the exact search on a list longer than EXACT_LIMIT (`fewestByFilling`), run only when
 // the heuristics stop above the lower bound: a heuristic's count can fall when a cut grows (first fit
 // places the longer cut differently), so a longer wall could need fewer lengths; the optimum never falls.
-// 10,000 nodes finds the better plans the property tests found (60,000 cost a six-room estimate about
-// 2.5 ms more, measured with `npm run bench`, mostly proving that no better plan exists).
-const LONG_LIST_NODES = 10_000;
+// 10,000 nodes missed a plan the property found (37 cuts of five lengths: 11 pieces where 10 do, found
+// within 50,000 nodes); 60,000 it is, and the stronger lower bound spares the search where the
+// heuristic's count is already proven, which is where most of its time went.
+const LONG_LIST_NODES = 60_000;
 const MAX_FILL_DEPTH = 2_000;
+// Limits of the exact search over "what is left" states (`fewestByStates`): a wall's cut list has a
+// handful of distinct lengths, so its states number in the thousands; beyond these, the bounded
+// search above stands.
+const STATE_LIMIT = 150_000;
+const STATE_STEPS = 2_000_000;
 
 function check(cuts: number[], stockLength: number, kerf: number): void {
   if (!(Number.isFinite(stockLength) && stockLength > 0)) throw new RangeError('stockPiecesNeeded: stockLength must be a positive number of inches');
@@ -62,6 +69,35 @@ function firstFitDecreasing(sizes: number[], cap: number): number[][] {
 function lowerBound(sizes: number[], cap: number): number {
   const total = sizes.reduce((s, x) => s + x, 0);
   return Math.max(1, Math.ceil(total / cap - EPS), sizes.filter((x) => x > cap / 2 + EPS).length);
+}
+
+/**
+ * A stronger lower bound for long lists (Martello and Toth's L2, "Knapsack Problems", Wiley 1990,
+ * §8.3.1; from memory): for each α up to half a stock, the cuts longer than stock − α each need a
+ * piece of their own, the cuts between half and stock − α one each too, and the cuts from α to half
+ * a stock need whatever the second group's offcuts cannot hold. It lets the search below stop at
+ * once where a heuristic already meets it, instead of spending its budget proving that.
+ */
+function strongLowerBound(sizes: number[], cap: number): number {
+  const half = cap / 2;
+  let best = lowerBound(sizes, cap);
+  const alphas = [0, ...new Set(sizes.filter((x) => x <= half + EPS))];
+  for (const alpha of alphas) {
+    let n1 = 0;
+    let n2 = 0;
+    let sum2 = 0;
+    let sum3 = 0;
+    for (const x of sizes) {
+      if (x > cap - alpha + EPS) n1++;
+      else if (x > half + EPS) {
+        n2++;
+        sum2 += x;
+      } else if (x + EPS >= alpha) sum3 += x;
+    }
+    const spill = sum3 - (n2 * cap - sum2);
+    best = Math.max(best, n1 + n2 + Math.max(0, Math.ceil(spill / cap - EPS)));
+  }
+  return best;
 }
 
 /**
@@ -143,7 +179,7 @@ function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: 
   // The search recurses once per distinct length per stock piece: keep it well inside the call stack.
   if (upper * (len.length + 2) > MAX_FILL_DEPTH) return null;
   const total = sizes.reduce((s, x) => s + x, 0);
-  const lower = lowerBound(sizes, cap);
+  const lower = strongLowerBound(sizes, cap);
   let best = upper;
   let nodes = 0;
   let gaveUp = false;
@@ -190,6 +226,66 @@ function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: 
   };
   fill(0, 0);
   return best < upper ? best : null;
+}
+
+/**
+ * Exact minimum for a long list whose distinct lengths and counts give at most `maxStates` "what is
+ * left" states (sizes kerf-grown), or null beyond that or past `maxSteps`. Each state's answer is
+ * worked out once: the next stock piece takes the longest cut left and a maximal set of the rest
+ * (bin completion, as in `fewestByFilling`), and the fewest pieces for what remains is looked up.
+ * Where it answers, the count is the optimum, which never falls as cuts grow (docs/sources.md §50).
+ */
+function fewestByStates(sizes: number[], cap: number, maxStates: number, maxSteps: number): number | null {
+  const { lengths: len, counts: cnt } = distinctLengths(sizes);
+  const stride: number[] = [];
+  let states = 1;
+  for (const c of cnt) {
+    stride.push(states);
+    states *= c + 1;
+    if (states > maxStates) return null;
+  }
+  const memo = new Int32Array(states).fill(-1);
+  memo[0] = 0;
+  let steps = 0;
+  const left = cnt.slice();
+  const take = new Array<number>(len.length).fill(0);
+  const indexOf = (): number => left.reduce((s, c, g) => s + c * stride[g]!, 0);
+  const solve = (index: number): number => {
+    const known = memo[index]!;
+    if (known >= 0) return known;
+    const first = left.findIndex((c) => c > 0);
+    let best = Infinity;
+    left[first] = left[first]! - 1;
+    const choose = (i: number, room: number): void => {
+      if (++steps > maxSteps) throw new RangeError('too many steps');
+      if (i === len.length) {
+        for (let g = 0; g < len.length; g++) if (left[g]! - take[g]! > 0 && len[g]! <= room + EPS) return;
+        const mine = take.slice();
+        for (let g = 0; g < len.length; g++) left[g] = left[g]! - mine[g]!;
+        take.fill(0);
+        best = Math.min(best, 1 + solve(indexOf()));
+        for (let g = 0; g < len.length; g++) left[g] = left[g]! + mine[g]!;
+        mine.forEach((t, g) => (take[g] = t));
+        return;
+      }
+      const most = Math.min(left[i]!, Math.floor(room / len[i]! + EPS));
+      for (let t = most; t >= 0; t--) {
+        take[i] = t;
+        choose(i + 1, room - t * len[i]!);
+      }
+      take[i] = 0;
+    };
+    choose(first, cap - len[first]!);
+    left[first] = left[first]! + 1;
+    memo[index] = best;
+    return best;
+  };
+  try {
+    return solve(indexOf());
+  } catch (error) {
+    if (error instanceof RangeError) return null;
+    throw error;
+  }
 }
 
 /** Best single pattern for the sequential heuristic: the subset of remaining cuts that fills one stock most. */
@@ -290,6 +386,8 @@ export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0)
   const heuristic = Math.min(ffd, sequentialPatterns(sizes, cap));
   // Beyond the exact search a count is an estimate, even where it meets the lower bound: called exact
   // only sometimes, it would lose its waste factor as a wall grew into such a case.
-  if (heuristic <= lowerBound(sizes, cap)) return { count: heuristic, exact: false };
+  if (heuristic <= strongLowerBound(sizes, cap)) return { count: heuristic, exact: false };
+  const optimum = fewestByStates(sizes, cap, STATE_LIMIT, STATE_STEPS);
+  if (optimum !== null) return { count: optimum, exact: false };
   return { count: fewestByFilling(sizes, cap, heuristic, LONG_LIST_NODES) ?? heuristic, exact: false };
 }
