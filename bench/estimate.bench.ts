@@ -13,15 +13,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
 import { tmpdir } from 'node:os';
 import { performance as perf } from 'node:perf_hooks';
-import {
-  estimate,
-  EstimateInputError,
-  parseRateBook,
-  piecesPerSheet,
-  projectSchema,
-  sampleRateBook,
-  type ProjectInput,
-} from '../src/lib/estimate/index.ts';
+import { estimate, EstimateInputError, parseRateBook, piecesPerSheet, projectSchema, sampleRateBook, type ProjectInput } from '../src/lib/estimate/index.ts';
 import { biggestAcceptedProject, costliestAcceptedProject, schemaMaximumProject } from '../src/lib/estimate/sample-big-projects.ts';
 import { clearSheetLayoutMemo } from '../src/lib/estimate/sheet-layout.ts';
 import { presentForHomeowner } from '../src/lib/server/estimates/present-estimate.ts';
