@@ -323,6 +323,39 @@ describe('properties of the price', () => {
       },
       rateBook,
     ).price.totalCents;
+  it('one more step on a stair wall costs no less: whole-length stiles no longer crowd out the exact count', () => {
+    // Found by the property (common practice, no source: a bigger job never costs less). The 63 stile
+    // and rail cuts of 8 ft stock include 17 that no other cut fits beside; the rest were counted by
+    // heuristics, one length too many with the shorter stair's 6 in top stiles. Those 17 now take a
+    // length each and the other 46 are counted exactly (docs/sources.md §50).
+    const withStair = (steps: number): number =>
+      estimate(
+        {
+          rooms: [
+            {
+              name: 'Test room',
+              ceilingHeight: 84 + 7 * 5,
+              walls: [
+                {
+                  length: 479,
+                  openings: [
+                    { kind: 'door', width: 65, sillHeight: 9, offset: 137, count: 1 },
+                    { kind: 'door', sillHeight: 9, offset: 249, count: 1 },
+                  ],
+                },
+                { length: 479, stair: { steps, rise: 5, run: 10, startsAt: 'left' } },
+              ],
+              treatment: { id: 'flat-panel', height: 'wainscot', wainscotHeight: 38 },
+            },
+          ],
+          builtBefore1978: 'no',
+          measuredBy: 'homeowner-estimate',
+          paint: false,
+        },
+        { ...rateBook, minimumJobCents: 0 },
+      ).price.totalCents;
+    expect(withStair(7)).toBeGreaterThanOrEqual(withStair(6));
+  });
   it('a 191 in full-height picture-frame wall costs no less than a 190 in one', () => {
     expect(plainWall(191, 'picture-frame')).toBeGreaterThanOrEqual(plainWall(190, 'picture-frame'));
   });

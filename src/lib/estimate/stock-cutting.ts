@@ -383,11 +383,23 @@ export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0)
     // No layout beat first fit and the search finished: first fit's count is the minimum.
     return { count: exact ? exact.length : ffd, exact: !status.gaveUp };
   }
+  // Beyond the exact search a count is an estimate, even where it is the optimum: called exact only
+  // sometimes, it would lose its waste factor as a wall grew into such a case.
+  // Cuts that no other cut fits beside (whole-length boards, mostly) take a stock piece each; what is
+  // left is often short enough, or has few enough states, to be counted exactly.
+  const shortest = Math.min(...sizes);
+  const rest = sizes.filter((x) => x + shortest <= cap + EPS);
+  const alone = sizes.length - rest.length;
+  if (rest.length === 0) return { count: alone, exact: false };
+  if (rest.length <= EXACT_LIMIT) {
+    const status = { gaveUp: false };
+    const restFfd = firstFitDecreasing(rest, cap).length;
+    const exact = exactBins(rest, cap, restFfd, status);
+    if (!status.gaveUp) return { count: alone + (exact ? exact.length : restFfd), exact: false };
+  }
   const heuristic = Math.min(ffd, sequentialPatterns(sizes, cap));
-  // Beyond the exact search a count is an estimate, even where it meets the lower bound: called exact
-  // only sometimes, it would lose its waste factor as a wall grew into such a case.
   if (heuristic <= strongLowerBound(sizes, cap)) return { count: heuristic, exact: false };
-  const optimum = fewestByStates(sizes, cap, STATE_LIMIT, STATE_STEPS);
-  if (optimum !== null) return { count: optimum, exact: false };
+  const optimum = fewestByStates(rest, cap, STATE_LIMIT, STATE_STEPS);
+  if (optimum !== null) return { count: alone + optimum, exact: false };
   return { count: fewestByFilling(sizes, cap, heuristic, LONG_LIST_NODES) ?? heuristic, exact: false };
 }

@@ -269,11 +269,22 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
   // Openings are placed from the left end, so a longer wall only lengthens the last stretch and only
   // ever adds uprights; spread over the whole wall and moved off the openings they land on, uprights
   // would stack on one another and their number would rise and fall with the wall's length.
-  const blocked = ctx.openings
-    .filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01)
-    .map((o) => [o.offset, o.offset + o.width] as const);
+  const blockers = ctx.openings.filter((o) => overlap(o.sillHeight, o.sillHeight + o.height, bottom, top) > 0.01);
+  const blocked = blockers.map((o) => [o.offset, o.offset + o.width] as const);
   if (ctx.rake) ctx.rakeCuts += columnRakeCuts(ctx.rake, spacing);
-  for (const [a, b] of subtractIntervals([0, ctx.length], blocked, w - 1e-9)) {
+  // Under an opening whose sill leaves room below it, the space under the sill is a stretch of its
+  // own (columnIntervals stops its uprights at the sill): dropped, a band rising past a sill would
+  // lose those uprights and cost less (docs/sources.md §52, as for picture frames).
+  const underSills = blockers.flatMap((o, i) =>
+    o.sillHeight - bottom < MIN_PIECE
+      ? []
+      : subtractIntervals(
+          [Math.max(0, o.offset), Math.min(ctx.length, o.offset + o.width)],
+          blocked.filter((_, j) => j !== i),
+          w - 1e-9,
+        ),
+  );
+  for (const [a, b] of [...subtractIntervals([0, ctx.length], blocked, w - 1e-9), ...underSills]) {
     const run = b - a;
     const n = run <= 2 * w ? 1 : Math.ceil((run - w) / spacing - 1e-9) + 1;
     const pitch = n > 1 ? (run - w) / (n - 1) : 0;

@@ -64,3 +64,30 @@ describe('stiles and battens between openings', () => {
     expect(full.every((x) => x + 2.5 <= 63.75 + 1e-9 || x >= 104.25 - 1e-9)).toBe(true);
   });
 });
+
+describe('uprights under a sill', () => {
+  // Found by the property: a 60 in board-and-batten wall with a 24 in tall opening whose sill is at
+  // 42 in. Once the band's battens reached past the sill, the stretch under the opening lost its
+  // battens (5 → 3), so a 46 in wainscot cost less than a 45 in one. Battens now stand under the sill,
+  // shorter (common practice, no source: a bigger job never costs less).
+  const passThrough = (wainscotHeight: number): number =>
+    estimate(
+      {
+        rooms: [
+          {
+            name: 'Kitchen',
+            ceilingHeight: 84,
+            walls: [{ length: 60, openings: [{ kind: 'door', height: 24, sillHeight: 42 }] }],
+            treatment: { id: 'board-and-batten', height: 'wainscot', wainscotHeight },
+          },
+        ],
+        builtBefore1978: 'no',
+        measuredBy: 'homeowner-estimate',
+        paint: false,
+      },
+      { ...rb, minimumJobCents: 0 },
+    ).price.totalCents;
+  it('a 46 in wainscot that rises past the sill costs no less than a 45 in one', () => {
+    expect(passThrough(46)).toBeGreaterThanOrEqual(passThrough(45));
+  });
+});
