@@ -79,6 +79,11 @@ export function fixingsOf(room: RoomTakeoff, catalogue: Catalogue): Fixing[] {
   if (own > 0) out.push({ what: 'trim', thickness: Math.max(...trim, 0), penetration: TRIM_PENETRATION, brads: own * r.perFootOfTrim });
   if (room.capRailFeet > 0) out.push({ what: 'cap rail', thickness: cap, penetration: TRIM_PENETRATION, brads: room.capRailFeet * r.perFootOfTrim });
   if (base > 0) out.push({ what: 'baseboard', thickness: baseboard, penetration: TRIM_PENETRATION, brads: base * r.perFootOfTrim });
+  // The skirt board along a stair is nailed like the baseboard it takes the place of: left out, one
+  // more step (more skirt, less baseboard) could need fewer brads.
+  const skirtId = catalogue.skirtBoardId ?? catalogue.baseboardId;
+  const skirt = board(skirtId)?.thickness ?? moulding(skirtId)?.thickness ?? baseboard;
+  if ((room.skirtFeet ?? 0) > 0) out.push({ what: 'skirt board', thickness: skirt, penetration: TRIM_PENETRATION, brads: room.skirtFeet! * r.perFootOfTrim });
   return out;
 }
 

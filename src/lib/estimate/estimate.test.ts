@@ -356,6 +356,39 @@ describe('properties of the price', () => {
       ).price.totalCents;
     expect(withStair(7)).toBeGreaterThanOrEqual(withStair(6));
   });
+  it('two more steps cost no less: the skirt board is nailed like the baseboard it replaces', () => {
+    // Found by the property (common practice, no source): two more steps made the skirt 22 in longer
+    // and the baseboard 18 in shorter, and with the skirt's brads left out a box of 2 in brads went.
+    const room = (steps: number): number =>
+      estimate(
+        {
+          rooms: [
+            {
+              name: 'Test room',
+              ceilingHeight: 84 + 8 * 6,
+              walls: [
+                {
+                  length: 441,
+                  openings: [
+                    { kind: 'door', width: 18, sillHeight: 6 },
+                    { kind: 'door', width: 18, sillHeight: 9 },
+                    { kind: 'door', width: 18 },
+                  ],
+                },
+                { length: 441 },
+                { length: 441, stair: { steps, rise: 6, run: 9, startsAt: 'left' } },
+              ],
+              treatment: { id: 'shiplap-horizontal', height: 'wainscot' },
+            },
+          ],
+          builtBefore1978: 'no',
+          measuredBy: 'homeowner-estimate',
+          paint: false,
+        },
+        { ...rateBook, minimumJobCents: 0 },
+      ).price.totalCents;
+    expect(room(8)).toBeGreaterThanOrEqual(room(6));
+  });
   it('a 191 in full-height picture-frame wall costs no less than a 190 in one', () => {
     expect(plainWall(191, 'picture-frame')).toBeGreaterThanOrEqual(plainWall(190, 'picture-frame'));
   });

@@ -109,7 +109,8 @@ export function materialsFor(rooms: RoomTakeoff[], reg: CutRegistry, catalogue: 
   const s = catalogue.supplies;
   const sum = (f: (r: RoomTakeoff) => number): number => rooms.reduce((acc, r) => acc + f(r), 0);
   const panelSqFt = sum((r) => r.panelSqFt);
-  const trimFeet = sum((r) => r.trimFeet);
+  // The skirt board on a stair wall is trim too (nailed like the baseboard).
+  const trimFeet = sum((r) => r.trimFeet + (r.skirtFeet ?? 0));
   const netSqFt = sum((r) => r.netSqFt);
 
   const brads = panelSqFt * s.brads.perSqFt + trimFeet * s.brads.perFootOfTrim;
