@@ -157,6 +157,19 @@ function exactBins(sizes: number[], cap: number, upper: number, status?: { gaveU
   return bins;
 }
 
+/**
+ * The fewest stock pieces for a list of at most EXACT_LIMIT cuts (sizes kerf-grown): the exact search,
+ * started from first fit's count; `finished` is false when the search hit its node cap (then first
+ * fit's count, or the best found, stands).
+ */
+function fewestOfShortList(sizes: number[], cap: number): { count: number; finished: boolean } {
+  const ffd = firstFitDecreasing(sizes, cap).length;
+  const status = { gaveUp: false };
+  const exact = exactBins(sizes, cap, ffd, status);
+  // No layout beat first fit and the search finished: first fit's count is the minimum.
+  return { count: exact ? exact.length : ffd, finished: !status.gaveUp };
+}
+
 /** The distinct sizes (to a millionth of an inch), longest first, with how many of each. */
 function distinctLengths(sizes: number[]): { lengths: number[]; counts: number[] } {
   const groups = new Map<number, number>();
@@ -183,7 +196,14 @@ function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: 
   let best = upper;
   let nodes = 0;
   let gaveUp = false;
-  const take = new Array<number>(len.length).fill(0);
+  const go = (): boolean => {
+    if (gaveUp || best <= lower) return false;
+    if (++nodes > maxNodes) {
+      gaveUp = true;
+      return false;
+    }
+    return true;
+  };
   const fill = (used: number, waste: number): void => {
     if (gaveUp || best <= lower) return;
     const first = cnt.findIndex((c) => c > 0);
@@ -195,33 +215,10 @@ function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: 
     cnt[first] = cnt[first]! - 1;
     // Each piece of a plan with best − 1 pieces can waste, on average, no more than this.
     const maxWaste = (best - 1) * cap - total;
-    const choose = (i: number, room: number): void => {
-      if (gaveUp || best <= lower) return;
-      if (++nodes > maxNodes) {
-        gaveUp = true;
-        return;
-      }
-      if (i === len.length) {
-        // Only maximal fills: a cut still left that fits the offcut would have gone in.
-        for (let g = 0; g < len.length; g++) if (cnt[g]! - take[g]! > 0 && len[g]! <= room + EPS) return;
-        if (waste + room > maxWaste + EPS && cnt.some((c, g) => c - take[g]! > 0)) return;
-        // The deeper pieces reuse `take`, so this piece's counts are kept aside.
-        const mine = take.slice();
-        for (let g = 0; g < len.length; g++) cnt[g] = cnt[g]! - mine[g]!;
-        take.fill(0);
-        fill(used + 1, waste + room);
-        for (let g = 0; g < len.length; g++) cnt[g] = cnt[g]! + mine[g]!;
-        mine.forEach((t, g) => (take[g] = t));
-        return;
-      }
-      const most = Math.min(cnt[i]!, Math.floor(room / len[i]! + EPS));
-      for (let t = most; t >= 0; t--) {
-        take[i] = t;
-        choose(i + 1, room - t * len[i]!);
-      }
-      take[i] = 0;
-    };
-    choose(first, cap - len[first]!);
+    forEachMaximalFill(len, cnt, first, cap, go, (offcut) => {
+      if (waste + offcut > maxWaste + EPS && cnt.some((c) => c > 0)) return;
+      fill(used + 1, waste + offcut);
+    });
     cnt[first] = cnt[first]! + 1;
   };
   fill(0, 0);
@@ -236,10 +233,10 @@ function fewestByFilling(sizes: number[], cap: number, upper: number, maxNodes: 
  * Where it answers, the count is the optimum, which never falls as cuts grow (docs/sources.md §50).
  */
 function fewestByStates(sizes: number[], cap: number, maxStates: number, maxSteps: number): number | null {
-  const { lengths: len, counts: cnt } = distinctLengths(sizes);
+  const { lengths: len, counts: left } = distinctLengths(sizes);
   const stride: number[] = [];
   let states = 1;
-  for (const c of cnt) {
+  for (const c of left) {
     stride.push(states);
     states *= c + 1;
     if (states > maxStates) return null;
@@ -247,8 +244,10 @@ function fewestByStates(sizes: number[], cap: number, maxStates: number, maxStep
   const memo = new Int32Array(states).fill(-1);
   memo[0] = 0;
   let steps = 0;
-  const left = cnt.slice();
-  const take = new Array<number>(len.length).fill(0);
+  const go = (): boolean => {
+    if (++steps > maxSteps) throw new RangeError('too many steps');
+    return true;
+  };
   const indexOf = (): number => left.reduce((s, c, g) => s + c * stride[g]!, 0);
   const solve = (index: number): number => {
     const known = memo[index]!;
@@ -256,26 +255,9 @@ function fewestByStates(sizes: number[], cap: number, maxStates: number, maxStep
     const first = left.findIndex((c) => c > 0);
     let best = Infinity;
     left[first] = left[first]! - 1;
-    const choose = (i: number, room: number): void => {
-      if (++steps > maxSteps) throw new RangeError('too many steps');
-      if (i === len.length) {
-        for (let g = 0; g < len.length; g++) if (left[g]! - take[g]! > 0 && len[g]! <= room + EPS) return;
-        const mine = take.slice();
-        for (let g = 0; g < len.length; g++) left[g] = left[g]! - mine[g]!;
-        take.fill(0);
-        best = Math.min(best, 1 + solve(indexOf()));
-        for (let g = 0; g < len.length; g++) left[g] = left[g]! + mine[g]!;
-        mine.forEach((t, g) => (take[g] = t));
-        return;
-      }
-      const most = Math.min(left[i]!, Math.floor(room / len[i]! + EPS));
-      for (let t = most; t >= 0; t--) {
-        take[i] = t;
-        choose(i + 1, room - t * len[i]!);
-      }
-      take[i] = 0;
-    };
-    choose(first, cap - len[first]!);
+    forEachMaximalFill(len, left, first, cap, go, () => {
+      best = Math.min(best, 1 + solve(indexOf()));
+    });
     left[first] = left[first]! + 1;
     memo[index] = best;
     return best;
@@ -286,6 +268,34 @@ function fewestByStates(sizes: number[], cap: number, maxStates: number, maxStep
     if (error instanceof RangeError) return null;
     throw error;
   }
+}
+
+/**
+ * Every maximal fill of one stock piece that holds a cut of length `len[first]` (already taken out of
+ * `left`, the counts of each distinct length still to cut): `visit(offcut)` is called for each with
+ * the fill's other cuts taken out of `left` too, and they are put back after. A fill is maximal when
+ * no cut still left fits its offcut; some optimal plan is made only of such pieces (bin completion,
+ * docs/sources.md §50). `go()` is asked at every step of the enumeration, and false ends that branch.
+ */
+function forEachMaximalFill(len: number[], left: number[], first: number, cap: number, go: () => boolean, visit: (offcut: number) => void): void {
+  const take = new Array<number>(len.length).fill(0);
+  const choose = (i: number, room: number): void => {
+    if (!go()) return;
+    if (i === len.length) {
+      for (let g = 0; g < len.length; g++) if (left[g]! - take[g]! > 0 && len[g]! <= room + EPS) return;
+      for (let g = 0; g < len.length; g++) left[g] = left[g]! - take[g]!;
+      visit(room);
+      for (let g = 0; g < len.length; g++) left[g] = left[g]! + take[g]!;
+      return;
+    }
+    const most = Math.min(left[i]!, Math.floor(room / len[i]! + EPS));
+    for (let t = most; t >= 0; t--) {
+      take[i] = t;
+      choose(i + 1, room - t * len[i]!);
+    }
+    take[i] = 0;
+  };
+  choose(first, cap - len[first]!);
 }
 
 /** Best single pattern for the sequential heuristic: the subset of remaining cuts that fills one stock most. */
@@ -376,12 +386,9 @@ export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0)
   if (cuts.length === 0) return { count: 0, exact: true };
   const sizes = cuts.map((c) => c + kerf);
   const cap = stockLength + kerf;
-  const ffd = firstFitDecreasing(sizes, cap).length;
   if (cuts.length <= EXACT_LIMIT) {
-    const status = { gaveUp: false };
-    const exact = exactBins(sizes, cap, ffd, status);
-    // No layout beat first fit and the search finished: first fit's count is the minimum.
-    return { count: exact ? exact.length : ffd, exact: !status.gaveUp };
+    const { count, finished } = fewestOfShortList(sizes, cap);
+    return { count, exact: finished };
   }
   // Beyond the exact search a count is an estimate, even where it is the optimum: called exact only
   // sometimes, it would lose its waste factor as a wall grew into such a case.
@@ -392,12 +399,10 @@ export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0)
   const alone = sizes.length - rest.length;
   if (rest.length === 0) return { count: alone, exact: false };
   if (rest.length <= EXACT_LIMIT) {
-    const status = { gaveUp: false };
-    const restFfd = firstFitDecreasing(rest, cap).length;
-    const exact = exactBins(rest, cap, restFfd, status);
-    if (!status.gaveUp) return { count: alone + (exact ? exact.length : restFfd), exact: false };
+    const { count, finished } = fewestOfShortList(rest, cap);
+    if (finished) return { count: alone + count, exact: false };
   }
-  const heuristic = Math.min(ffd, sequentialPatterns(sizes, cap));
+  const heuristic = Math.min(firstFitDecreasing(sizes, cap).length, sequentialPatterns(sizes, cap));
   if (heuristic <= strongLowerBound(sizes, cap)) return { count: heuristic, exact: false };
   const optimum = fewestByStates(rest, cap, STATE_LIMIT, STATE_STEPS);
   if (optimum !== null) return { count: alone + optimum, exact: false };
