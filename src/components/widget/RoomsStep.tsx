@@ -108,23 +108,16 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
               </label>
             </div>
 
-            <div role="radiogroup" aria-label="How would you like to give the sizes?" className="grid grid-cols-2 gap-2">
-              {(['room', 'walls'] as const).map((mode) => (
-                <label
-                  key={mode}
-                  className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${room.mode === mode ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
-                >
-                  <input
-                    type="radio"
-                    className="sr-only"
-                    name={`${domId}-mode`}
-                    checked={room.mode === mode}
-                    onChange={() => update(r, { mode, accent: null })}
-                  />
-                  {mode === 'room' ? 'Room length × width' : 'Wall by wall'}
-                </label>
-              ))}
-            </div>
+            <CardChoices
+              label="How would you like to give the sizes?"
+              name={`${domId}-mode`}
+              options={[
+                ['room', 'Room length × width'],
+                ['walls', 'Wall by wall'],
+              ]}
+              value={room.mode}
+              onChange={(mode) => update(r, { mode, accent: null })}
+            />
 
             {room.mode === 'room' ? (
               <>
@@ -215,23 +208,16 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
 
             <fieldset className="space-y-3">
               <legend className="field-label">Doors, windows and outlets{withFixtures ? ', fixtures' : ''}</legend>
-              <div role="radiogroup" aria-label={`Where are they ${inRoom}?`} className="grid grid-cols-2 gap-2">
-                {(['auto', 'by-wall'] as const).map((placement) => (
-                  <label
-                    key={placement}
-                    className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${room.placement === placement ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
-                  >
-                    <input
-                      type="radio"
-                      className="sr-only"
-                      name={`${domId}-placement`}
-                      checked={room.placement === placement}
-                      onChange={() => update(r, { placement })}
-                    />
-                    {placement === 'auto' ? 'Count them; place them for me' : "I'll say which wall"}
-                  </label>
-                ))}
-              </div>
+              <CardChoices
+                label={`Where are they ${inRoom}?`}
+                name={`${domId}-placement`}
+                options={[
+                  ['auto', 'Count them; place them for me'],
+                  ['by-wall', "I'll say which wall"],
+                ]}
+                value={room.placement}
+                onChange={(placement) => update(r, { placement })}
+              />
               {placed ? (
                 <>
                   <WallItemsEditor items={room.counts} withFixtures={withFixtures} where={inRoom} onChange={(counts) => update(r, { counts })} />
@@ -317,6 +303,35 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
           Add another room
         </button>
       )}
+    </div>
+  );
+}
+
+/** Card-style radio choices side by side (the radio hidden, its focus shown on the card). */
+function CardChoices<T extends string>({
+  label,
+  name,
+  options,
+  value,
+  onChange,
+}: {
+  label: string;
+  name: string;
+  options: ReadonlyArray<readonly [T, string]>;
+  value: T;
+  onChange: (value: T) => void;
+}) {
+  return (
+    <div role="radiogroup" aria-label={label} className="grid grid-cols-2 gap-2">
+      {options.map(([option, text]) => (
+        <label
+          key={option}
+          className={`choice-card cursor-pointer rounded-md border px-3 py-2 text-sm ${value === option ? 'border-[var(--brand)] bg-sawdust/40 font-medium' : 'border-slate/30'}`}
+        >
+          <input type="radio" className="sr-only" name={name} checked={value === option} onChange={() => onChange(option)} />
+          {text}
+        </label>
+      ))}
     </div>
   );
 }
