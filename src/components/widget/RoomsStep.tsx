@@ -1,19 +1,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { Units } from '~/lib/estimate/index.ts';
 import { LengthField } from './LengthField';
-import {
-  isDamp,
-  newWall,
-  newRoom,
-  offersFixtures,
-  placeForMe,
-  placeholders,
-  roomWalls,
-  wallFitErrors,
-  type FieldErrors,
-  type RoomDraft,
-  type WallDraft,
-} from './draft';
+import { isDamp, newWall, newRoom, offersFixtures, placeForMe, roomWalls, wallFitErrors, type FieldErrors, type RoomDraft, type WallDraft } from './draft';
 import { WallItemsEditor } from './WallItemsEditor';
 
 const ROOM_NAMES = ['Living room', 'Dining room', 'Bedroom', 'Hallway', 'Entry', 'Bathroom', 'Kitchen', 'Office', 'Stairway', 'Laundry'];
@@ -45,7 +33,6 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
     onChange([...rooms.slice(0, removed.index), removed.room, ...rooms.slice(removed.index)]);
     setRemoved(null);
   };
-  const examples = placeholders(units);
   const hint = units === 'imperial' ? 'Type it as your tape reads: 11\' 4", 136 or 11 ft 4 in.' : 'In mm, cm or m: 3450 mm, 345 cm, 3.45 m.';
   return (
     <div className="space-y-6">
@@ -78,7 +65,7 @@ export function RoomsStep({ rooms, units, errors, onChange }: Props) {
                 className="field-input"
                 list={`${domId}-names`}
                 value={room.name}
-                placeholder={examples.name}
+                placeholder="e.g. Living room"
                 maxLength={60}
                 onChange={(event) => update(r, { name: event.target.value })}
               />

@@ -108,27 +108,6 @@ export function newDraft(units: Units): Draft {
   };
 }
 
-/** Example answers shown as placeholders in empty fields. */
-export function placeholders(units: Units) {
-  return units === 'imperial'
-    ? {
-        length: 'e.g. 14\' 0"',
-        width: 'e.g. 12\' 0"',
-        wall: 'e.g. 10\' 6"',
-        ceilingHeight: 'e.g. 8\' 0"',
-        wainscotHeight: 'e.g. 36"',
-        name: 'e.g. Living room',
-      }
-    : {
-        length: 'e.g. 4300 mm',
-        width: 'e.g. 3650 mm',
-        wall: 'e.g. 3200 mm',
-        ceilingHeight: 'e.g. 2440 mm',
-        wainscotHeight: 'e.g. 900 mm',
-        name: 'e.g. Living room',
-      };
-}
-
 // Rooms whose names say they get damp: bathrooms, laundries, utility and shower rooms (the wet
 // rooms of common practice, no source).
 const DAMP_NAMES = /\b(bath|bathroom|washroom|wash room|laundry|shower|shower room|utility|wc|toilet|powder room|ensuite|en-suite|mud ?room|wet room)\b/i;
