@@ -27,6 +27,8 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await page.goto('/demo/cedar-hollow');
   const widget = page.frameLocator('iframe[title="Price your walls"]');
   await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
+  // Answers typed before the island hydrates would be replaced by the fresh form's empty ones.
+  await expect(widget.locator('astro-island')).not.toHaveAttribute('ssr', { timeout: 15_000 });
 
   // Room 1 by room size; room 2 wall by wall.
   await widget.getByLabel('Which room?').first().fill('Dining room');
