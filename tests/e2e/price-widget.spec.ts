@@ -4,6 +4,7 @@ import sharp from 'sharp';
 import { query } from '../helpers/app-database';
 import { waitForMail } from '../helpers/mailbox';
 import { sidewaysPhoneJpeg, smallPng } from '../helpers/photo-files';
+import { openWidgetOnDemoSite, waitUntilAPersonCouldSend } from './helpers/embed';
 import { signedInAs } from './helpers/staff';
 
 const s3 = new S3Client({
@@ -23,12 +24,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
     // The browser logs every 4xx answer; the 400 for the out-of-area postcode below is expected.
     if (message.type() === 'error' && !message.text().includes('status of 400')) consoleErrors.push(message.text());
   });
-  await page.setViewportSize({ width: 390, height: 844 });
-  await page.goto('/demo/cedar-hollow');
-  const widget = page.frameLocator('iframe[title="Price your walls"]');
-  await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
-  // Answers typed before the island hydrates would be replaced by the fresh form's empty ones.
-  await expect(widget.locator('astro-island')).not.toHaveAttribute('ssr', { timeout: 15_000 });
+  const widget = await openWidgetOnDemoSite(page, { width: 390, height: 844 });
 
   // Room 1 by room size; room 2 wall by wall.
   await widget.getByLabel('Which room?').first().fill('Dining room');
@@ -104,6 +100,7 @@ test('a homeowner prices two rooms with photos on a firm’s website and sends t
   await widget.getByRole('button', { name: /Send to/ }).click();
   await expect(widget.getByText(/doesn't work in 10001 yet/)).toBeVisible();
   await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
+  await waitUntilAPersonCouldSend(page);
   await widget.getByRole('button', { name: /Send to/ }).click();
 
   await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });

@@ -2,6 +2,7 @@ import { expect, test, type Frame } from '@playwright/test';
 import { estimate, sampleRateBook } from '../../src/lib/estimate/index.ts';
 import { presentForHomeowner } from '../../src/lib/server/estimates/present-estimate.ts';
 import { roomWallNames } from '../../src/lib/shared/wall-names.ts';
+import { openWidgetOnDemoSite } from './helpers/embed';
 
 // An invented 5 × 8 ft bathroom, all four walls in beadboard wainscot, with a tub on the first long wall.
 const names = roomWallNames(96, 60);
@@ -32,12 +33,9 @@ const bathroom = presentForHomeowner(
 
 test('a room’s walls are drawn to one scale with labels readable on a 320 px phone', async ({ page }) => {
   test.setTimeout(60_000);
-  await page.setViewportSize({ width: 320, height: 740 });
   // Whatever the answers, the range comes back as this bathroom, so the drawings are known.
   await page.route('**/api/embed/*/estimate', (route) => route.fulfill({ json: { estimate: bathroom } }));
-  await page.goto('/demo/cedar-hollow');
-  const widget = page.frameLocator('iframe[title="Price your walls"]');
-  await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
+  const widget = await openWidgetOnDemoSite(page, { width: 320, height: 740 });
   await widget.getByLabel('Which room?').first().fill('Bathroom');
   await widget.getByRole('textbox', { name: 'Room length' }).fill("8'");
   await widget.getByRole('textbox', { name: 'Room width' }).fill("5'");

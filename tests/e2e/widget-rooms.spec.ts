@@ -2,6 +2,7 @@ import { expect, test, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 import { query } from '../helpers/app-database';
 import { waitForMail } from '../helpers/mailbox';
+import { noteWidgetOpened, waitUntilAPersonCouldSend } from './helpers/embed';
 import { signedInAs } from './helpers/staff';
 
 // The rooms people have: a small bathroom whose door, window and tub are each on their own wall,
@@ -30,6 +31,7 @@ for (const width of [320, 375])
   }) => {
     test.setTimeout(90_000);
     await page.setViewportSize({ width, height: 740 });
+    noteWidgetOpened(page);
     await page.goto('/embed/cedar-hollow');
     await expect(page.locator('astro-island')).not.toHaveAttribute('ssr');
     await bathroom(page, "5'");
@@ -92,6 +94,7 @@ for (const width of [320, 375])
     await page.getByRole('textbox', { name: 'Street address', exact: true }).fill('27 Heron Row');
     await page.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
     await page.getByLabel(/may contact me/).check();
+    await waitUntilAPersonCouldSend(page);
     await page.getByRole('button', { name: /Send to/ }).click();
     await expect(page.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
 

@@ -1,6 +1,7 @@
 import { expect, test, type FrameLocator, type Page } from '@playwright/test';
 import { query } from '../helpers/app-database';
 import { smallPng } from '../helpers/photo-files';
+import { openWidgetOnDemoSite, waitUntilAPersonCouldSend } from './helpers/embed';
 
 // The price widget's frame: no request spins without end, the live range says what it waits for,
 // the range stays in view on a phone, the frame fits its content, and a reload loses nothing.
@@ -8,12 +9,8 @@ import { smallPng } from '../helpers/photo-files';
 
 const ESTIMATE = '**/api/embed/*/estimate';
 
-async function openOnDemoSite(page: Page, size = { width: 375, height: 740 }): Promise<FrameLocator> {
-  await page.setViewportSize(size);
-  await page.goto('/demo/cedar-hollow');
-  const widget = page.frameLocator('iframe[title="Price your walls"]');
-  await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
-  return widget;
+function openOnDemoSite(page: Page, size = { width: 375, height: 740 }): Promise<FrameLocator> {
+  return openWidgetOnDemoSite(page, size);
 }
 
 /** One 14 × 12 ft living room, typed in full (rooms may start empty). */
@@ -145,6 +142,7 @@ test('on a 375 × 740 phone the range is on screen at every step, and after Send
   await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('27 Quarry Bend');
   await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
   await widget.getByLabel(/may contact me/).check();
+  await waitUntilAPersonCouldSend(page);
   await widget.getByRole('button', { name: /Send to/ }).click();
   await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
 
@@ -192,6 +190,7 @@ test('a reload mid-way keeps the answers, the step and the photos, and the inqui
   await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('9 Millrace Row');
   await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
   await widget.getByLabel(/may contact me/).check();
+  await waitUntilAPersonCouldSend(page);
   await widget.getByRole('button', { name: /Send to/ }).click();
   await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
   const reference = (await widget.locator('strong.figures').textContent())!.trim();

@@ -1,4 +1,5 @@
-import type { APIRequestContext } from '@playwright/test';
+import { expect, type APIRequestContext, type FrameLocator, type Page } from '@playwright/test';
+import { MIN_SECONDS_TO_SUBMIT } from '../../../src/lib/server/embed/human-pace.ts';
 
 /** Opens the embed page as a browser would and returns the signed form token it hands the widget. */
 export async function formTokenFor(request: APIRequestContext, slug: string): Promise<string> {
@@ -25,3 +26,35 @@ export const twoRoomProject = {
   builtBefore1978: 'no',
   measuredBy: 'homeowner-estimate',
 };
+
+/**
+ * Opens the firm's demo page and waits until the framed widget has hydrated: answers typed
+ * into the server-rendered form before then are replaced by the fresh island's empty ones.
+ */
+export async function openWidgetOnDemoSite(page: Page, size?: { width: number; height: number }): Promise<FrameLocator> {
+  if (size) await page.setViewportSize(size);
+  noteWidgetOpened(page);
+  await page.goto('/demo/cedar-hollow');
+  const widget = page.frameLocator('iframe[title="Price your walls"]');
+  await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
+  await expect(widget.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
+  return widget;
+}
+
+const openedAt = new WeakMap<Page, number>();
+
+/** Call just before the page that gets the widget's form token is opened. */
+export function noteWidgetOpened(page: Page): void {
+  openedAt.set(page, Date.now());
+}
+
+/**
+ * Waits until a person could have filled the form: the server quietly drops an inquiry sent
+ * sooner than MIN_SECONDS_TO_SUBMIT after the form was opened, and a browser test can be faster.
+ */
+export async function waitUntilAPersonCouldSend(page: Page): Promise<void> {
+  const opened = openedAt.get(page);
+  if (opened === undefined) throw new Error('Call noteWidgetOpened(page) before opening the widget.');
+  const left = opened + MIN_SECONDS_TO_SUBMIT * 1000 + 250 - Date.now();
+  if (left > 0) await page.waitForTimeout(left);
+}

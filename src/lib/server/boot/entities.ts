@@ -2,6 +2,7 @@
 import { Company } from '../companies/company.entity';
 import { FunnelEvent } from '../embed/funnel-event.entity';
 import { Lead } from '../leads/lead.entity';
+import { LeadEvent } from '../leads/lead-event.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -12,4 +13,18 @@ import { PasswordReset } from '../auth/password-reset.entity';
 import { Invite } from '../team/invite.entity';
 import { RateLimitEntry } from '../db/rate-limit-entry.entity';
 
-export const entities = [Company, User, Membership, OutboxMail, RateBookVersion, Lead, LeadPhoto, FunnelEvent, Session, PasswordReset, Invite, RateLimitEntry];
+export const entities = [
+  Company,
+  User,
+  Membership,
+  OutboxMail,
+  RateBookVersion,
+  Lead,
+  LeadEvent,
+  LeadPhoto,
+  FunnelEvent,
+  Session,
+  PasswordReset,
+  Invite,
+  RateLimitEntry,
+];

@@ -5,6 +5,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { estimate, type ProjectInput, type RateBook } from '~/lib/estimate';
 import type { Company } from '../companies/company.entity';
 import { estimateSnapshot } from '../estimates/estimate-snapshot';
+import { recordLeadEvent } from '../leads/lead-events';
 import { Lead } from '../leads/lead.entity';
 import { leadInputs } from '../leads/lead-inputs';
 import { newLeadReference } from '../leads/lead-reference';
@@ -129,7 +130,7 @@ export async function seedDemoLeads(em: EntityManager, company: Company, version
       const daysAgo = Math.floor((index / 40) * 60 + random() * 2);
       const createdAt = new Date(Date.now() - daysAgo * 86_400_000 - Math.floor(random() * 36_000_000));
       const email = `${first}.${last}${index}`.toLowerCase() + '@homeowner.test';
-      em.create(Lead, {
+      const lead = em.create(Lead, {
         company,
         reference: newLeadReference(),
         stage,
@@ -151,6 +152,7 @@ export async function seedDemoLeads(em: EntityManager, company: Company, version
         createdAt,
         updatedAt: createdAt,
       });
+      recordLeadEvent(em, lead, 'received', { at: createdAt, data: { source: 'widget' } });
     }
   }
   await em.flush();

@@ -12,10 +12,8 @@ import { InvalidInput } from '../errors';
 import { createLead, leadForIdempotencyKey, requestDigestOf } from '../leads/lead.service';
 import { attachDraftPhotos } from '../photos/lead-photo.service';
 import { recordFunnelStep } from './funnel';
+import { MIN_SECONDS_TO_SUBMIT } from './human-pace';
 import { estimateForDraft, openWidgetDraft } from './widget-estimate';
-
-/** Humans take longer than this between opening the form and sending it; scripts often do not. */
-export const MIN_SECONDS_TO_SUBMIT = 4;
 
 export type SubmittedLead = {
   /** False when the submission looked automated: the answer looks the same, but nothing is stored. */

@@ -3,6 +3,7 @@ import { TenantEntity } from '../companies/tenant.entity';
 import type { Estimate, ProjectInput } from '~/lib/estimate';
 import type { Envelope } from '../db/versioned-json';
 import type { RateBookVersion } from '../rates/rate-book-version.entity';
+import type { Membership } from '../users/membership.entity';
 import type { ContactMethod, LeadSource, LeadStage } from '~/lib/shared/labels';
 
 /** A homeowner's inquiry: their inputs, the estimate they saw, how to reach them, where it stands. */
@@ -86,4 +87,41 @@ export class Lead extends TenantEntity {
   /** Secret for the homeowner's private link to view the estimate later (stored hashed). */
   @Property({ type: 'string', length: 64, hidden: true })
   viewTokenHash!: string;
+
+  /** The teammate working it; cleared when they leave the firm. */
+  @ManyToOne({ entity: 'Membership', deleteRule: 'set null', nullable: true })
+  assignee: Membership | null = null;
+
+  /** When someone on the staff first opened it; until then it is unread. */
+  @Property({ type: 'datetime', nullable: true })
+  openedAt: Date | null = null;
+
+  /** The first and the latest contact with the homeowner (a logged call, an e-mail sent). */
+  @Property({ type: 'datetime', nullable: true })
+  firstContactAt: Date | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  lastContactAt: Date | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  nextFollowUpAt: Date | null = null;
+
+  /**
+   * When the first contact is due by the firm's response target (working hours in its time zone);
+   * with no first contact by then the inquiry is overdue. Set when the lead is created.
+   */
+  @Property({ type: 'datetime', nullable: true })
+  responseDueAt: Date | null = null;
+
+  /** Why it is not going ahead (from the firm's list), when it is not. */
+  @Property({ type: 'string', length: 120, nullable: true })
+  lostReason: string | null = null;
+
+  /** Soft delete: hidden from every list, restorable by an owner until it is purged. */
+  @Property({ type: 'datetime', nullable: true })
+  deletedAt: Date | null = null;
+
+  /** 0–100, higher is more promising; how it is worked out lives in `triage-score.ts`. */
+  @Property({ type: 'smallint' })
+  triageScore: number & Opt = 0;
 }

@@ -18,6 +18,7 @@ import { leadInputs } from './lead-inputs';
 import { firmReplyTo, homeownerConfirmation, newLeadAlert } from './lead-mail';
 import { roomChoices } from './room-choices';
 import { newLeadReference } from './lead-reference';
+import { recordLeadEvent } from './lead-events';
 
 const digest = (text: string) => createHash('sha256').update(text).digest('hex');
 
@@ -42,6 +43,8 @@ export type NewLead = {
   draftId?: string | null;
   /** Photos that go with it, for the firm's alert. */
   photoCount?: number;
+  /** The staff member who typed it in (a phone inquiry); absent for the widget. */
+  enteredByUserId?: string | null;
 };
 
 export type CreatedLead = {
@@ -112,6 +115,7 @@ export async function createLead(
         draftId: input.draftId ?? null,
         viewTokenHash: digest(viewToken),
       });
+      recordLeadEvent(tx, lead, 'received', { actorUserId: input.enteredByUserId ?? null, at: lead.createdAt, data: { source: lead.source } });
       await inTransaction?.(tx, lead);
 
       const facts = { ...input.contact, reference: lead.reference, message: lead.message };
