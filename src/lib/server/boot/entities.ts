@@ -3,6 +3,8 @@ import { Company } from '../companies/company.entity';
 import { FunnelEvent } from '../embed/funnel-event.entity';
 import { Lead } from '../leads/lead.entity';
 import { LeadEvent } from '../leads/lead-event.entity';
+import { LeadViewKey } from '../leads/lead-view-key.entity';
+import { MailTemplate } from '../leads/mail-template.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -21,6 +23,8 @@ export const entities = [
   RateBookVersion,
   Lead,
   LeadEvent,
+  LeadViewKey,
+  MailTemplate,
   LeadPhoto,
   FunnelEvent,
   Session,
