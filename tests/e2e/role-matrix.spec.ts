@@ -10,7 +10,7 @@ import { query } from '../helpers/app-database';
  * Add a row for every new file under src/pages/app or src/pages/api/app; the last test fails otherwise.
  */
 type Who = 'signedOut' | 'sales' | 'other' | 'owner';
-type Ids = { samMember: string; oliveMember: string; invite: string; lead: string };
+type Ids = { samMember: string; oliveMember: string; invite: string; lead: string; template: string };
 type Row = {
   route: string;
   method: 'GET' | 'POST' | 'PATCH' | 'DELETE';
@@ -66,6 +66,63 @@ const MATRIX: Row[] = [
     path: (ids) => `/api/app/team/members/${ids.oliveMember}`,
     expect: { signedOut: 401, sales: 403, other: 404, owner: 409 },
   },
+  // Working an inquiry (notes, calls, e-mail, photos) and the firm's e-mail templates.
+  {
+    route: '/app/setup/mail-templates',
+    method: 'GET',
+    path: () => '/app/setup/mail-templates',
+    expect: { signedOut: 302, sales: 403, other: 200, owner: 200 },
+  },
+  {
+    route: '/api/app/leads/[id]/notes',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.lead}/notes`,
+    json: { text: 'Checked by the role matrix.' },
+    expect: { signedOut: 401, sales: 201, other: 404, owner: 201 },
+  },
+  {
+    route: '/api/app/leads/[id]/calls',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.lead}/calls`,
+    json: { outcome: 'no-answer' },
+    expect: { signedOut: 401, sales: 201, other: 404, owner: 201 },
+  },
+  {
+    route: '/api/app/leads/[id]/emails',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.lead}/emails`,
+    // An empty subject: allowed callers get past the guard to the field check, and no mail is sent.
+    json: { subject: '', body: 'Hello {name}' },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/[id]/photos',
+    method: 'GET',
+    path: (ids) => `/api/app/leads/${ids.lead}/photos`,
+    expect: { signedOut: 401, sales: 200, other: 404, owner: 200 },
+  },
+  { route: '/api/app/mail-templates', method: 'GET', path: () => '/api/app/mail-templates', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
+  {
+    route: '/api/app/mail-templates',
+    method: 'POST',
+    path: () => '/api/app/mail-templates',
+    json: { name: 'Matrix check', subject: 'Hello {name}', body: 'Checked by the role matrix.' },
+    // The other firm's owner adds to their own firm.
+    expect: { signedOut: 401, sales: 403, other: 201, owner: 201 },
+  },
+  {
+    route: '/api/app/mail-templates/[id]',
+    method: 'PATCH',
+    path: (ids) => `/api/app/mail-templates/${ids.template}`,
+    json: { name: 'Matrix target', subject: 'Hello {name}', body: 'Checked by the role matrix.' },
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 200 },
+  },
+  {
+    route: '/api/app/mail-templates/[id]',
+    method: 'DELETE',
+    path: (ids) => `/api/app/mail-templates/${ids.template}`,
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 204 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.
@@ -86,7 +143,17 @@ test.beforeAll(async () => {
   const team = await (await clients.owner.get('/api/app/team')).json();
   const member = (email: string) => team.members.find((m: { email: string }) => m.email === email).id;
   const [lead] = await query<{ id: string }>(`select l.id from lead l join company c on c.id = l.company_id where c.slug = 'cedar-hollow' limit 1`);
-  ids = { samMember: member('sam@cedar-hollow.test'), oliveMember: member('olive@cedar-hollow.test'), invite: (await invite.json()).id, lead: lead!.id };
+  const template = await clients.owner.post('/api/app/mail-templates', {
+    data: { name: 'Matrix target', subject: 'Hello {name}', body: 'Checked by the role matrix.' },
+  });
+  expect(template.status()).toBe(201);
+  ids = {
+    samMember: member('sam@cedar-hollow.test'),
+    oliveMember: member('olive@cedar-hollow.test'),
+    invite: (await invite.json()).id,
+    lead: lead!.id,
+    template: (await template.json()).id,
+  };
 });
 
 test.afterAll(async () => {
