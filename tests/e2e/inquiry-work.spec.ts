@@ -56,13 +56,22 @@ test('a salesperson works a new inquiry: photo, call, note with a mention, e-mai
   await expect(staff.getByRole('heading', { level: 1 })).toContainText(name);
   await expect(staff.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
 
-  // The photo full size: a dialog, Escape closes it, focus goes back to the thumbnail.
+  // The photo full size: a dialog, Escape closes it, focus goes back to the thumbnail. Its first
+  // link is refused as storage refuses an expired one; the gallery asks for a fresh link and shows it.
+  let refused = 0;
+  await staff.route(/\/photos\/[0-9a-f-]{36}\/[0-9a-f-]{36}\.jpg\?/, async (route) => {
+    if (refused++ === 0) await route.fulfill({ status: 403, contentType: 'application/xml', body: '<Error><Code>AccessDenied</Code></Error>' });
+    else await route.continue();
+  });
+  const resigned = staff.waitForRequest((request) => /\/api\/app\/leads\/[0-9a-f-]{36}\/photos$/.test(request.url()));
   const thumbnail = staff.getByRole('button', { name: /Open photo 1 of 1 full size/ });
   await thumbnail.click();
+  await resigned;
   const viewer = staff.getByRole('dialog', { name: /Photo 1 of 1/ });
   await expect(viewer).toBeVisible();
   const full = viewer.getByRole('img', { name: /full size/ });
   await expect.poll(() => full.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBeGreaterThan(0);
+  expect(refused).toBe(2);
   await staff.keyboard.press('Escape');
   await expect(viewer).toBeHidden();
   await expect(thumbnail).toBeFocused();

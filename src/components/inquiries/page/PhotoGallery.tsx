@@ -24,11 +24,13 @@ export function PhotoGallery({ leadId, initial }: { leadId: string; initial: Gal
   const lastOpened = useRef(0);
   // One fresh fetch per failing link; a link that fails again after that is shown as missing.
   const retried = useRef(new Set<string>());
+  // Bumped after fresh links arrive, so each image is loaded again even if its link came back the same.
+  const [generation, setGeneration] = useState(0);
 
   const onImageError = (url: string) => {
     if (retried.current.has(url)) return;
     retried.current.add(url);
-    void mutate();
+    void mutate().then(() => setGeneration((g) => g + 1));
   };
 
   useEffect(() => {
@@ -68,6 +70,7 @@ export function PhotoGallery({ leadId, initial }: { leadId: string; initial: Gal
               aria-label={`Open photo ${index + 1} of ${photos.length} full size: ${photo.name}`}
             >
               <img
+                key={`${photo.id}-${generation}`}
                 src={photo.thumbnailUrl}
                 alt={`Photo ${photo.name}`}
                 className="h-32 rounded"
@@ -108,6 +111,7 @@ export function PhotoGallery({ leadId, initial }: { leadId: string; initial: Gal
             </div>
             <div className="flex items-center justify-center bg-ink/5 p-2">
               <img
+                key={`${current.id}-${generation}`}
                 src={current.imageUrl}
                 alt={`Photo ${current.name}, full size`}
                 className="max-h-[75vh] max-w-full object-contain"
