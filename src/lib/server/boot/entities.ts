@@ -3,6 +3,8 @@ import { Company } from '../companies/company.entity';
 import { FunnelEvent } from '../embed/funnel-event.entity';
 import { Lead } from '../leads/lead.entity';
 import { LeadEvent } from '../leads/lead-event.entity';
+import { LostReasonList } from '../leads/lost-reason-list.entity';
+import { FollowUpReminder } from '../leads/follow-up-reminder.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -21,6 +23,8 @@ export const entities = [
   RateBookVersion,
   Lead,
   LeadEvent,
+  LostReasonList,
+  FollowUpReminder,
   LeadPhoto,
   FunnelEvent,
   Session,
