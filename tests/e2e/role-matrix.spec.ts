@@ -3,6 +3,7 @@ import path from 'node:path';
 import { expect, test, type APIRequestContext } from '@playwright/test';
 import { signedInAs, signedOut } from './helpers/staff';
 import { query } from '../helpers/app-database';
+import { DEFAULT_LOST_REASONS } from '../../src/lib/shared/lead-flow-schemas';
 
 /**
  * Every staff route, with the status each kind of caller gets. `other` is the owner of the second
@@ -10,10 +11,10 @@ import { query } from '../helpers/app-database';
  * Add a row for every new file under src/pages/app or src/pages/api/app; the last test fails otherwise.
  */
 type Who = 'signedOut' | 'sales' | 'other' | 'owner';
-type Ids = { samMember: string; oliveMember: string; invite: string; lead: string; template: string };
+type Ids = { samMember: string; oliveMember: string; invite: string; lead: string; template: string; receivedEvent: string };
 type Row = {
   route: string;
-  method: 'GET' | 'POST' | 'PATCH' | 'DELETE';
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   path: (ids: Ids) => string;
   json?: unknown;
   form?: (ids: Ids) => Record<string, string>;
@@ -34,6 +35,12 @@ const MATRIX: Row[] = [
     // Sets Sam's role to what it already is: allowed callers change nothing.
     form: (ids) => ({ intent: 'role', id: ids.samMember, role: 'sales' }),
     expect: { signedOut: 302, sales: 403, other: 404, owner: 303 },
+  },
+  {
+    route: '/app/setup/lost-reasons',
+    method: 'GET',
+    path: () => '/app/setup/lost-reasons',
+    expect: { signedOut: 302, sales: 403, other: 200, owner: 200 },
   },
   { route: '/app/account', method: 'GET', path: () => '/app/account', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/api/app/me', method: 'GET', path: () => '/api/app/me', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
@@ -123,6 +130,56 @@ const MATRIX: Row[] = [
     path: (ids) => `/api/app/mail-templates/${ids.template}`,
     expect: { signedOut: 401, sales: 403, other: 404, owner: 204 },
   },
+  // The inquiry page's workflow routes. Bodies that reach the rules are refused (400/409), so no
+  // caller changes the demo inquiry; another firm's owner gets 404 before the body is read.
+  {
+    route: '/api/app/leads/[id]/timeline',
+    method: 'GET',
+    path: (ids) => `/api/app/leads/${ids.lead}/timeline`,
+    expect: { signedOut: 401, sales: 200, other: 404, owner: 200 },
+  },
+  {
+    route: '/api/app/leads/[id]/stage',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.lead}/stage`,
+    json: { to: 'no-such-stage' },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/[id]/assignee',
+    method: 'PUT',
+    path: (ids) => `/api/app/leads/${ids.lead}/assignee`,
+    json: { membershipId: 'nobody-here' },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/[id]/follow-up',
+    method: 'PUT',
+    path: (ids) => `/api/app/leads/${ids.lead}/follow-up`,
+    json: { at: '2020-01-01T09:00' },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    // "Received" is never undoable: allowed callers get 409 and nothing changes.
+    route: '/api/app/leads/[id]/events/[eventId]/undo',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.lead}/events/${ids.receivedEvent}/undo`,
+    expect: { signedOut: 401, sales: 409, other: 404, owner: 409 },
+  },
+  {
+    route: '/api/app/settings/lost-reasons',
+    method: 'GET',
+    path: () => '/api/app/settings/lost-reasons',
+    expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
+  },
+  {
+    // Saves the defaults: the other firm's owner sets their own firm's list, nothing of the first firm's.
+    route: '/api/app/settings/lost-reasons',
+    method: 'PUT',
+    path: () => '/api/app/settings/lost-reasons',
+    json: { reasons: [...DEFAULT_LOST_REASONS] },
+    expect: { signedOut: 401, sales: 403, other: 200, owner: 200 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.
@@ -147,12 +204,14 @@ test.beforeAll(async () => {
     data: { name: 'Matrix target', subject: 'Hello {name}', body: 'Checked by the role matrix.' },
   });
   expect(template.status()).toBe(201);
+  const [received] = await query<{ id: string }>(`select id from lead_event where lead_id = $1 and kind = 'received' limit 1`, [lead!.id]);
   ids = {
     samMember: member('sam@cedar-hollow.test'),
     oliveMember: member('olive@cedar-hollow.test'),
     invite: (await invite.json()).id,
     lead: lead!.id,
     template: (await template.json()).id,
+    receivedEvent: received!.id,
   };
 });
 

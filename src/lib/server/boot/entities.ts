@@ -5,6 +5,8 @@ import { Lead } from '../leads/lead.entity';
 import { LeadEvent } from '../leads/lead-event.entity';
 import { LeadViewKey } from '../leads/lead-view-key.entity';
 import { MailTemplate } from '../leads/mail-template.entity';
+import { LostReasonList } from '../leads/lost-reason-list.entity';
+import { FollowUpReminder } from '../leads/follow-up-reminder.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -25,6 +27,8 @@ export const entities = [
   LeadEvent,
   LeadViewKey,
   MailTemplate,
+  LostReasonList,
+  FollowUpReminder,
   LeadPhoto,
   FunnelEvent,
   Session,

@@ -2,7 +2,8 @@
 import type { JobDefinition } from '../jobs/runner';
 import { mailDeliveryJob } from '../mail/delivery-job';
 import { abandonedPhotosJob } from '../photos/abandoned-photos';
+import { followUpRemindersJob } from '../leads/follow-up-reminders';
 
 // Each job has its own data type; the list holds them all.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const backgroundJobs: readonly JobDefinition<any>[] = [mailDeliveryJob, abandonedPhotosJob];
+export const backgroundJobs: readonly JobDefinition<any>[] = [mailDeliveryJob, abandonedPhotosJob, followUpRemindersJob];

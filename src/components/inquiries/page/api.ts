@@ -1,0 +1,54 @@
+import useSWR, { mutate } from 'swr';
+import { timelineUrl, type TimelineView } from '~/lib/shared/inquiry-timeline';
+
+/** A refused request: the server's message and its field messages (`{"error","fields"}`). */
+export class RequestFailed extends Error {
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+  }
+}
+
+const UNREACHABLE = 'We could not reach the server. Check your connection, then try again.';
+
+async function call<T>(method: string, url: string, body?: unknown): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(url, {
+      method,
+      headers: body === undefined ? {} : { 'content-type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+      credentials: 'same-origin',
+    });
+  } catch (error) {
+    if (error instanceof TypeError) throw new RequestFailed(UNREACHABLE, 0);
+    throw error;
+  }
+  const answer = (await response.json().catch((error: unknown) => {
+    if (error instanceof SyntaxError) return {};
+    throw error;
+  })) as { error?: string; fields?: Record<string, string> };
+  if (!response.ok) throw new RequestFailed(answer.error ?? 'Something went wrong on our side. Please try again.', response.status, answer.fields);
+  return answer as T;
+}
+
+export const getJson = <T>(url: string) => call<T>('GET', url);
+export const sendJson = <T>(method: 'POST' | 'PUT', url: string, body?: unknown) => call<T>(method, url, body);
+
+/**
+ * The inquiry's timeline and workflow state, shared by the page's islands through SWR's cache:
+ * after any action the answer is put in the cache, and every island showing it re-renders.
+ */
+export function useInquiryTimeline(leadId: string, initial: TimelineView) {
+  return useSWR<TimelineView>(timelineUrl(leadId), getJson, { fallbackData: initial, revalidateOnFocus: true });
+}
+
+/** Sends a workflow action; its answer (the refreshed timeline) replaces the cached one. */
+export async function act(leadId: string, method: 'POST' | 'PUT', url: string, body?: unknown): Promise<TimelineView> {
+  const view = await sendJson<TimelineView>(method, url, body);
+  await mutate(timelineUrl(leadId), view, { revalidate: false });
+  return view;
+}
