@@ -3,6 +3,7 @@ import { Company } from '../companies/company.entity';
 import { FunnelEvent } from '../embed/funnel-event.entity';
 import { Lead } from '../leads/lead.entity';
 import { LeadEvent } from '../leads/lead-event.entity';
+import { InquiryDigest } from '../leads/inquiry-digest.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -27,4 +28,5 @@ export const entities = [
   PasswordReset,
   Invite,
   RateLimitEntry,
+  InquiryDigest,
 ];
