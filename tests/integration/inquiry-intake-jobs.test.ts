@@ -15,6 +15,8 @@ import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
 import { purgeDeletedLeads, purgeDeletedLeadsJob } from '../../src/lib/server/intake/purge-deleted-leads';
 import { morningDigestJob, sendMorningDigests } from '../../src/lib/server/intake/morning-digest';
 import { headObject, putObject } from '../../src/lib/server/storage/s3';
+import { refreshTriageScore } from '../../src/lib/server/leads/triage';
+import { overdueTriageJob, refreshOverdueTriage } from '../../src/lib/server/leads/triage-refresh';
 import { buildFirm } from '../helpers/accounts';
 import { buildLead } from '../helpers/factories';
 import { openMigratedDatabase } from '../helpers/migrated-database';
@@ -135,5 +137,33 @@ describe('the morning digest', () => {
     expect((await sendMorningDigests(em(), { now: new Date('2026-12-05T13:31:00Z'), companyIds: [company.id] })).sent).toBe(2);
     // The scheduled job runs over every firm without failing (whatever the real clock says).
     await morningDigestJob.run({}, { em: em(), send: noSend });
+  });
+});
+
+describe('triage scores as response targets pass', () => {
+  test('an inquiry nobody contacted loses its response points once the target passes; a contacted one keeps them', async () => {
+    const { company } = await buildFirm(em(), [{ name: 'Rui', role: 'owner' }]);
+    const due = new Date(Date.now() - 60 * 60 * 1000);
+    const tx = em();
+    const waiting = buildLead(tx, company.id);
+    waiting.responseDueAt = due;
+    const answered = buildLead(tx, company.id);
+    answered.responseDueAt = due;
+    answered.firstContactAt = new Date(due.getTime() - 60_000);
+    const before = new Date(due.getTime() - 60_000);
+    await refreshTriageScore(tx, waiting, before);
+    await refreshTriageScore(tx, answered, before);
+    await tx.flush();
+    const scores = async () =>
+      (await em().find(Lead, { id: { $in: [waiting.id, answered.id] } })).map((l) => [l.id === waiting.id ? 'waiting' : 'answered', l.triageScore]);
+    const [w0, a0] = [waiting.triageScore, answered.triageScore];
+
+    // Other tests' rows in this database may change too; this test's own are checked below.
+    expect((await refreshOverdueTriage(em())).changed).toBeGreaterThanOrEqual(1);
+    // The default weights give "response so far" 25 of the 100 points (src/lib/estimate/schemas.ts).
+    expect(Object.fromEntries(await scores())).toEqual({ waiting: w0 - 25, answered: a0 });
+    // Run again (the scheduled job): nothing more changes.
+    await overdueTriageJob.run({}, { em: em(), send: noSend });
+    expect(Object.fromEntries(await scores())).toEqual({ waiting: w0 - 25, answered: a0 });
   });
 });

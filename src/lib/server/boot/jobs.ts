@@ -4,7 +4,8 @@ import { mailDeliveryJob } from '../mail/delivery-job';
 import { abandonedPhotosJob } from '../photos/abandoned-photos';
 import { purgeDeletedLeadsJob } from '../intake/purge-deleted-leads';
 import { morningDigestJob } from '../intake/morning-digest';
+import { overdueTriageJob } from '../leads/triage-refresh';
 
 // Each job has its own data type; the list holds them all.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const backgroundJobs: readonly JobDefinition<any>[] = [mailDeliveryJob, abandonedPhotosJob, purgeDeletedLeadsJob, morningDigestJob];
+export const backgroundJobs: readonly JobDefinition<any>[] = [mailDeliveryJob, abandonedPhotosJob, purgeDeletedLeadsJob, morningDigestJob, overdueTriageJob];
