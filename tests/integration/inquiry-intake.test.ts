@@ -25,6 +25,7 @@ import * as notificationsRoute from '../../src/pages/api/app/me/notifications';
 import { buildFirm } from '../helpers/accounts';
 import { buildRateBookVersion } from '../helpers/factories';
 import { callAsStaff, type StaffCaller } from '../helpers/staff-route';
+import { renderStaffPage, textOf } from '../helpers/staff-pages';
 
 let orm: MikroORM;
 beforeAll(async () => {
@@ -179,6 +180,12 @@ describe('who gets new-inquiry e-mails', () => {
     expect(off).toEqual({ status: 200, json: { newInquiryMail: false } });
     expect(await recipients(await enter(firm.owner))).toEqual(everyone.filter((e) => e !== firm.members[2]!.email));
 
+    // The team screen says who gets them.
+    const team = textOf(await renderStaffPage('team', { em: em(), ...firm.owner }, '/app/setup/team'));
+    expect(team).toContain('Every owner and salesperson gets an e-mail about each new inquiry');
+    expect(team).toMatch(new RegExp(`${firm.members[1]!.email} Role of Sid .*? Save Yes`));
+    expect(team).toMatch(new RegExp(`${firm.members[2]!.email} Role of Tove .*? Save No \\(turned off on their account page\\)`));
+
     const bad = await call(notificationsRoute.PATCH, firm.sales2, 'PATCH', '/api/app/me/notifications', {}, { newInquiryMail: 'yes' });
     expect(bad.status).toBe(400);
     expect(bad.json.fields).toHaveProperty('newInquiryMail');
@@ -200,6 +207,13 @@ describe('duplicates', () => {
     expect(await duplicateOf(byEmail)).toBe(first);
     // The newest open match: the phone matches the first one only.
     expect(await duplicateOf(byPhone)).toBe(first);
+    // The inquiry page says so, with a merge; the score shows with its reasons beside it.
+    const firstReference = (await em().findOneOrFail(Lead, { id: first })).reference;
+    const page = textOf(await renderStaffPage('lead', { em: em(), ...firm.sales }, `/app/leads/${byPhone}`, { id: byPhone }));
+    expect(page).toContain(`Looks like the same homeowner as ${firstReference} (Bea Whitlow, same phone`);
+    expect(page).toContain(`Merge into ${firstReference}`);
+    expect(page).toMatch(/Triage score \d+ of 100/);
+    expect(page).toContain("Homeowner's timeline: Not asked");
     expect(await duplicateOf(unrelated)).toBeNull();
     expect(await duplicateOf(elsewhere)).toBeNull();
   });
