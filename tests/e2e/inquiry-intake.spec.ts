@@ -23,6 +23,9 @@ test('a salesperson takes an inquiry on the phone with the widget’s room form 
   await page.getByRole('textbox', { name: 'Ceiling height' }).fill("8'");
   await page.getByText('Beadboard').first().click();
   await page.getByRole('textbox', { name: 'Height to the top of the cap rail' }).fill('36"');
+  // The live range, as the widget would show it for the same rooms.
+  await expect(page.getByTestId('live-range')).toContainText(/\$[\d,]+ – \$[\d,]+/, { timeout: 10_000 });
+  const liveRange = (await page.getByTestId('live-range').locator('.figures').textContent())!.trim();
 
   // Saving before every question is answered is refused beside the question.
   await page.getByRole('textbox', { name: "Homeowner's name" }).fill('Vera Quill');
@@ -42,6 +45,8 @@ test('a salesperson takes an inquiry on the phone with the widget’s room form 
   await expect(page).toHaveURL(/\/app\/leads\/[0-9a-f-]{36}$/, { timeout: 15_000 });
   await expect(page.getByRole('heading', { name: /Vera Quill/ })).toBeVisible();
   await expect(page.getByTestId('lead-range')).toHaveText(/^\$[\d,]+ – \$[\d,]+$/);
+  // The live range priced the unanswered 1978 question as "not sure", the answer given: the same range.
+  await expect(page.getByTestId('lead-range')).toHaveText(liveRange);
   await expect(page.getByText('Entered by staff')).toBeVisible();
   await expect(page.getByTestId('triage-score')).toHaveText(/^\d{1,3}$/);
   await expect(page.getByTestId('triage-reason')).toHaveCount(6);

@@ -77,6 +77,20 @@ const MATRIX: Row[] = [
     expect: { signedOut: 401, sales: 400, other: 400, owner: 400 },
   },
   {
+    route: '/api/app/leads/estimate',
+    method: 'POST',
+    // Prices the rooms and stores nothing.
+    path: () => '/api/app/leads/estimate',
+    json: {
+      project: {
+        rooms: [{ name: 'Hall', ceilingHeight: 96, walls: [{ length: 120 }], treatment: { id: 'beadboard', height: 'wainscot' } }],
+        builtBefore1978: 'no',
+        measuredBy: 'homeowner-tape',
+      },
+    },
+    expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
+  },
+  {
     route: '/api/app/leads/[id]/merge',
     method: 'POST',
     // Into itself: refused as bad input by those allowed, before anything moves.

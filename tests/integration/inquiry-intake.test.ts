@@ -18,6 +18,7 @@ import { OutboxMail } from '../../src/lib/server/mail/outbox-mail.entity';
 import { LeadPhoto } from '../../src/lib/server/photos/lead-photo.entity';
 import { NotFound } from '../../src/lib/server/errors';
 import * as leadsRoute from '../../src/pages/api/app/leads/index';
+import * as estimateRoute from '../../src/pages/api/app/leads/estimate';
 import * as leadRoute from '../../src/pages/api/app/leads/[id]/index';
 import * as restoreRoute from '../../src/pages/api/app/leads/[id]/restore';
 import * as mergeRoute from '../../src/pages/api/app/leads/[id]/merge';
@@ -128,6 +129,24 @@ describe('phone inquiries', () => {
     expect(again.status).toBe(200);
     expect(again.json.lead.id).toBe(lead.id);
     expect(await em().count(Lead, { company: firm.company })).toBe(1);
+  });
+
+  test('the live range while typing is the widget’s estimate of the same rooms; bad rooms are refused by field', async () => {
+    const firm = await firmWithRates();
+    const { status, json } = await call(estimateRoute.POST, firm.sales, 'POST', '/api/app/leads/estimate', {}, { project: PROJECT });
+    expect(status).toBe(200);
+    // Source: the estimating core itself on the same project and Rate book.
+    expect(json.estimate.range.text).toBe(estimate(projectSchema.parse({ ...PROJECT, photoCount: 0 }), sampleRateBook()).price.rangeText);
+    const bad = await call(
+      estimateRoute.POST,
+      firm.sales,
+      'POST',
+      '/api/app/leads/estimate',
+      {},
+      { project: { ...PROJECT, rooms: [{ ...PROJECT.rooms[0], ceilingHeight: 2 }] } },
+    );
+    expect(bad.status).toBe(400);
+    expect(bad.json.fields).toHaveProperty(['project.rooms.0.ceilingHeight']);
   });
 
   test('bad input is refused field by field, and nothing is stored', async () => {

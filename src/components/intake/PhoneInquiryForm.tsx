@@ -1,10 +1,15 @@
 import '~/lib/shared/zod-in-browser';
-import { useMemo, useRef, useState } from 'react';
-import type { Units } from '~/lib/estimate/index.ts';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import useSWR from 'swr';
+import type { ProjectInput, Units } from '~/lib/estimate/index.ts';
+import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
 import { staffContactSchema } from '~/lib/shared/intake-schemas';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
 import { ContactStep, type ContactWording } from '../widget/ContactStep';
-import { newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from '../widget/draft';
+import { ApiError, ESTIMATE_TIMEOUT_MS, postJson } from '../widget/api';
+import { draftWaitingContext, newDraft, normaliseServerErrors, toProject, unansweredQuestions, type Draft } from '../widget/draft';
+import { LiveRange, type LiveRangeState } from '../widget/LiveRange';
+import { waitingFor } from '../widget/waiting-for';
 import { focusFirstError } from '../widget/focus-first-error';
 import { OptionsStep } from '../widget/OptionsStep';
 import { RoomsStep } from '../widget/RoomsStep';
@@ -27,6 +32,18 @@ const STAFF_WORDS: ContactWording = {
   sending: 'Saving…',
 };
 
+function useDebounced<T>(value: T, ms: number): T {
+  const [current, setCurrent] = useState(value);
+  useEffect(() => {
+    const timer = setTimeout(() => setCurrent(value), ms);
+    return () => clearTimeout(timer);
+  }, [value, ms]);
+  return current;
+}
+
+const fetchStaffEstimate = (project: ProjectInput) =>
+  postJson<{ estimate: HomeownerEstimate }>('/api/app/leads/estimate', { project }, { timeoutMs: ESTIMATE_TIMEOUT_MS, retries: 1 }).then((d) => d.estimate);
+
 /**
  * A phone inquiry, typed in by staff: the price widget's own room, finish and detail forms on one
  * page, then the homeowner's details. The server prices it with the firm's Rate book, exactly as
@@ -44,11 +61,33 @@ export default function PhoneInquiryForm({ units, treatments, firmName, brand, b
 
   const { project, errors: localErrors, origin } = useMemo(() => toProject(draft, units), [draft, units]);
   const projectErrors = { ...localErrors, ...unansweredQuestions(draft) };
-  const serverProjectErrors = normaliseServerErrors(
-    Object.fromEntries(Object.entries(serverFields).filter(([path]) => path.startsWith('project.'))),
-    origin,
-    draft,
-  );
+
+  // The live range, as the widget shows it: the same estimate of the rooms typed so far.
+  const latestKey = project ? JSON.stringify(project) : null;
+  const requestKey = useDebounced(latestKey, 400);
+  const live = useSWR(requestKey ? ['staff-estimate', requestKey] : null, ([, key]) => fetchStaffEstimate(JSON.parse(key)), {
+    keepPreviousData: true,
+    revalidateOnFocus: false,
+    shouldRetryOnError: false,
+  });
+  const liveError = live.error ? (live.error instanceof ApiError ? live.error : new ApiError('Something went wrong. Please try again.', 0)) : null;
+  const liveFieldErrors = liveError ? normaliseServerErrors(liveError.fields, origin, draft) : {};
+  const waiting = waitingFor({ ...liveFieldErrors, ...localErrors }, draftWaitingContext(draft, units));
+  const liveState: LiveRangeState =
+    project && live.data && !liveError
+      ? { kind: 'range', estimate: live.data, updating: latestKey !== requestKey || live.isValidating }
+      : waiting
+        ? { kind: 'waiting', what: waiting }
+        : liveError
+          ? { kind: 'failed', error: liveError }
+          : project
+            ? { kind: 'working' }
+            : { kind: 'empty' };
+
+  const serverProjectErrors = {
+    ...liveFieldErrors,
+    ...normaliseServerErrors(Object.fromEntries(Object.entries(serverFields).filter(([path]) => path.startsWith('project.'))), origin, draft),
+  };
   const visibleErrors = showErrors ? { ...serverProjectErrors, ...projectErrors } : serverProjectErrors;
   const contactErrors = Object.fromEntries(Object.entries(serverFields).filter(([path]) => path.startsWith('contact.')));
 
@@ -133,6 +172,9 @@ export default function PhoneInquiryForm({ units, treatments, firmName, brand, b
           </p>
         )}
       </section>
+      <div className="sticky bottom-0 border-t border-slate/30 bg-paper/95 py-3 text-center" aria-live="polite" data-testid="live-range">
+        <LiveRange state={liveState} onRetry={() => void live.mutate()} />
+      </div>
     </div>
   );
 }

@@ -38,3 +38,6 @@ export const mergeRequestSchema = z.strictObject({
 export const notificationSettingsSchema = z.strictObject({
   newInquiryMail: z.boolean({ error: 'Choose on or off.' }),
 });
+
+/** Body of POST /api/app/leads/estimate: the live range while staff type the rooms in. */
+export const staffEstimateRequestSchema = z.strictObject({ project: projectSchema });
