@@ -19,7 +19,7 @@ const FOUNDATION = ['config', 'clock', 'time', 'log', 'after-response', 'unavail
 const BELOW_DOMAINS = [...FOUNDATION, 'db', 'rate-limit'];
 const DOMAINS_BELOW_AUTH = [...BELOW_DOMAINS, 'companies', 'jobs', 'users', 'mail', 'storage', 'rates'];
 const BELOW_PHOTOS = [...DOMAINS_BELOW_AUTH, 'auth', 'estimates', 'leads', 'team'];
-const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed'];
+const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake'];
 
 /** @type {[unit: string, mayImport: string[]][]} */
 const SERVER_LAYERS = [
@@ -53,6 +53,8 @@ const SERVER_LAYERS = [
   ['team', [...DOMAINS_BELOW_AUTH, 'auth', 'estimates']],
   ['photos', BELOW_PHOTOS],
   ['embed', [...BELOW_PHOTOS, 'photos']],
+  // Inquiries coming in and kept tidy: staff-entered inquiries, merging, purging deleted ones, the morning digest.
+  ['intake', [...BELOW_PHOTOS, 'photos']],
   // Middleware pieces (glue for src/middleware.ts).
   ['request-log', BELOW_BOOT],
   ['failures', BELOW_BOOT],

@@ -23,6 +23,9 @@ test('staff forms and routes answer 404 for malformed ids, never 500', async () 
     }
     expect((await owner.get(`/app/leads/${id}`)).status(), `lead page ${id}`).toBe(404);
     expect((await owner.delete(`/api/app/team/invites/${id}`)).status(), `invite ${id}`).toBe(404);
+    expect((await owner.delete(`/api/app/leads/${id}`)).status(), `delete lead ${id}`).toBe(404);
+    expect((await owner.post(`/api/app/leads/${id}/restore`)).status(), `restore lead ${id}`).toBe(404);
+    expect((await owner.post(`/api/app/leads/${id}/merge`, { data: { into: id } })).status(), `merge lead ${id}`).toBe(404);
   }
   await owner.dispose();
 });

@@ -11,12 +11,12 @@ import { DEFAULT_LOST_REASONS } from '../../src/lib/shared/lead-flow-schemas';
  * Add a row for every new file under src/pages/app or src/pages/api/app; the last test fails otherwise.
  */
 type Who = 'signedOut' | 'sales' | 'other' | 'owner';
-type Ids = { samMember: string; oliveMember: string; invite: string; lead: string; template: string; receivedEvent: string };
+type Ids = { samMember: string; oliveMember: string; invite: string; lead: string; template: string; receivedEvent: string; phoneLead: string };
 type Row = {
   route: string;
   method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   path: (ids: Ids) => string;
-  json?: unknown;
+  json?: unknown | ((ids: Ids) => unknown);
   form?: (ids: Ids) => Record<string, string>;
   expect: Record<Who, number>;
 };
@@ -180,6 +180,58 @@ const MATRIX: Row[] = [
     json: { reasons: [...DEFAULT_LOST_REASONS] },
     expect: { signedOut: 401, sales: 403, other: 200, owner: 200 },
   },
+  { route: '/app/leads/new', method: 'GET', path: () => '/app/leads/new', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
+  { route: '/app/leads/deleted', method: 'GET', path: () => '/app/leads/deleted', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  {
+    route: '/api/app/leads',
+    method: 'POST',
+    path: () => '/api/app/leads',
+    // No consent and no rooms: every caller allowed in is refused on the fields, and nothing is stored.
+    json: { idempotencyKey: 'matrix-phone-inquiry-0001', project: { rooms: [] }, contact: { name: 'Matrix' } },
+    expect: { signedOut: 401, sales: 400, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/estimate',
+    method: 'POST',
+    // Prices the rooms and stores nothing.
+    path: () => '/api/app/leads/estimate',
+    json: {
+      project: {
+        rooms: [{ name: 'Hall', ceilingHeight: 96, walls: [{ length: 120 }], treatment: { id: 'beadboard', height: 'wainscot' } }],
+        builtBefore1978: 'no',
+        measuredBy: 'homeowner-tape',
+      },
+    },
+    expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
+  },
+  {
+    route: '/api/app/leads/[id]/merge',
+    method: 'POST',
+    // Into itself: refused as bad input by those allowed, before anything moves.
+    path: (ids) => `/api/app/leads/${ids.lead}/merge`,
+    json: (ids: Ids) => ({ into: ids.lead }),
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/[id]',
+    method: 'DELETE',
+    // The phone inquiry made for this test; the owner's delete is undone by the next row.
+    path: (ids) => `/api/app/leads/${ids.phoneLead}`,
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 200 },
+  },
+  {
+    route: '/api/app/leads/[id]/restore',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.phoneLead}/restore`,
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 200 },
+  },
+  {
+    route: '/api/app/me/notifications',
+    method: 'PATCH',
+    path: () => '/api/app/me/notifications',
+    json: { newInquiryMail: true },
+    expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.
@@ -205,6 +257,26 @@ test.beforeAll(async () => {
   });
   expect(template.status()).toBe(201);
   const [received] = await query<{ id: string }>(`select id from lead_event where lead_id = $1 and kind = 'received' limit 1`, [lead!.id]);
+  const phone = await clients.owner.post('/api/app/leads', {
+    data: {
+      idempotencyKey: 'matrix-phone-inquiry-0002',
+      project: {
+        rooms: [{ name: 'Hall', ceilingHeight: 96, walls: [{ length: 120 }], treatment: { id: 'beadboard', height: 'wainscot' } }],
+        builtBefore1978: 'no',
+        measuredBy: 'homeowner-tape',
+      },
+      contact: {
+        name: 'Matrix Phone',
+        email: 'matrix-phone@homeowner.test',
+        phone: '(512) 555-0133',
+        address: '3 Test Row',
+        postcode: '78704',
+        preferredContact: 'phone',
+        consent: true,
+      },
+    },
+  });
+  expect(phone.status()).toBe(201);
   ids = {
     samMember: member('sam@cedar-hollow.test'),
     oliveMember: member('olive@cedar-hollow.test'),
@@ -212,6 +284,7 @@ test.beforeAll(async () => {
     lead: lead!.id,
     template: (await template.json()).id,
     receivedEvent: received!.id,
+    phoneLead: (await phone.json()).lead.id,
   };
 });
 
@@ -221,7 +294,8 @@ test.afterAll(async () => {
 
 function call(client: APIRequestContext, row: Row) {
   const url = row.path(ids);
-  const options = { maxRedirects: 0, ...(row.json ? { data: row.json } : {}), ...(row.form ? { form: row.form(ids) } : {}) };
+  const json = typeof row.json === 'function' ? row.json(ids) : row.json;
+  const options = { maxRedirects: 0, ...(json ? { data: json } : {}), ...(row.form ? { form: row.form(ids) } : {}) };
   return client.fetch(url, { method: row.method, ...options });
 }
 

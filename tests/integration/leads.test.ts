@@ -84,8 +84,9 @@ describe('sending a lead', () => {
     expect(lead.phone).toBe('+15125550161');
     expect(lead.rangeLowCents).toBeLessThanOrEqual(lead.rangeHighCents);
     const queued = await em.find(OutboxMail, { company: cedar, subject: { $like: `%${lead.reference}%` } });
-    // The firm's alert goes to each notification recipient; the homeowner's confirmation carries the range.
-    expect(queued.map((m) => m.toAddress).sort()).toEqual([...cedar.notificationEmails].sort());
+    // The firm's alert goes to every owner and salesperson who has not turned it off (the demo firm's
+    // three people); the homeowner's confirmation carries the range.
+    expect(queued.map((m) => m.toAddress).sort()).toEqual(['olive@cedar-hollow.test', 'rhea@cedar-hollow.test', 'sam@cedar-hollow.test']);
 
     // This lead's own mail: the firm's alerts and the homeowner's confirmation.
     const ownMail = { $or: [{ id: { $in: queued.map((m) => m.id) } }, { toAddress: request.contact.email }] };

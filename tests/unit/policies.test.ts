@@ -23,6 +23,7 @@ const SAME_FIRM: Record<string, Record<StaffRole, boolean>> = {
   canSeeLead: { owner: true, sales: true },
   canEditLead: { owner: true, sales: true },
   canAssignLead: { owner: true, sales: true },
+  canEnterLead: { owner: true, sales: true },
   canDeleteLead: { owner: true, sales: false },
   canSeeRates: { owner: true, sales: false },
   canEditRates: { owner: true, sales: false },
@@ -50,7 +51,7 @@ describe('permission policies', () => {
   });
 
   test('a policy about the firm itself, asked without an object, means the viewer’s active firm', () => {
-    for (const name of ['canSeeLeads', 'canSeeRates', 'canEditRates', 'canPublishRates', 'canManageTeam', 'canUseSetup']) {
+    for (const name of ['canSeeLeads', 'canEnterLead', 'canSeeRates', 'canEditRates', 'canPublishRates', 'canManageTeam', 'canUseSetup']) {
       const policy = POLICIES[name] as (viewer: Viewer) => boolean;
       for (const role of STAFF_ROLES) expect(`${name} ${role}: ${policy(viewer(role))}`).toBe(`${name} ${role}: ${SAME_FIRM[name]![role]}`);
     }

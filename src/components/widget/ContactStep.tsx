@@ -4,11 +4,18 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { contactSchema, type ContactInput } from '~/lib/shared/lead-schemas';
 
+/** The words that change when staff fill the form in for a homeowner on the phone. */
+export type ContactWording = { name: string; reach: string; consent: string; submit: string; sending: string };
+
 type Props = {
   firmName: string;
   sending: boolean;
   serverErrors: Record<string, string>;
   onSubmit: (contact: ContactInput, honeypot: string) => void;
+  /** Staff words instead of the homeowner's (the staff page); the hidden field is left out then. */
+  wording?: ContactWording;
+  /** A schema with the same fields and staff messages (the staff page). */
+  schema?: z.ZodType<z.output<typeof contactSchema>, z.input<typeof contactSchema>>;
 };
 
 function Field({ id, label, error, children, hint }: { id: string; label: string; error?: string; hint?: string; children: React.ReactNode }) {
@@ -29,10 +36,17 @@ function Field({ id, label, error, children, hint }: { id: string; label: string
 }
 
 /** Contact details, validated by the same schema as the API; server messages land on their fields. */
-export function ContactStep({ firmName, sending, serverErrors, onSubmit }: Props) {
+export function ContactStep({ firmName, sending, serverErrors, onSubmit, wording, schema = contactSchema }: Props) {
   const id = useId();
+  const words: ContactWording = wording ?? {
+    name: 'Your name',
+    reach: `How should ${firmName} reach you?`,
+    consent: `I agree that ${firmName} may contact me about this inquiry.`,
+    submit: `Send to ${firmName}`,
+    sending: 'Sending…',
+  };
   const form = useForm<z.input<typeof contactSchema>, unknown, z.output<typeof contactSchema>>({
-    resolver: zodResolver(contactSchema),
+    resolver: zodResolver(schema),
     defaultValues: { name: '', email: '', phone: '', address: '', postcode: '', preferredContact: 'phone', message: '' },
   });
   const errors = form.formState.errors;
@@ -49,7 +63,7 @@ export function ContactStep({ firmName, sending, serverErrors, onSubmit }: Props
         onSubmit(form.getValues() as ContactInput, honeypot?.value ?? '');
       })}
     >
-      <Field id={`${id}-name`} label="Your name" error={message('name')}>
+      <Field id={`${id}-name`} label={words.name} error={message('name')}>
         <input id={`${id}-name`} className="field-input" autoComplete="name" {...aria('name')} {...form.register('name')} />
       </Field>
       <Field id={`${id}-email`} label="E-mail" error={message('email')}>
@@ -65,7 +79,7 @@ export function ContactStep({ firmName, sending, serverErrors, onSubmit }: Props
         <input id={`${id}-postcode`} className="field-input max-w-[10rem]" autoComplete="postal-code" {...aria('postcode')} {...form.register('postcode')} />
       </Field>
       <fieldset>
-        <legend className="field-label">How should {firmName} reach you?</legend>
+        <legend className="field-label">{words.reach}</legend>
         <div className="mt-1 flex flex-wrap gap-3">
           {(['phone', 'text', 'email'] as const).map((method) => (
             <label key={method} className="flex items-center gap-2 text-sm">
@@ -80,14 +94,16 @@ export function ContactStep({ firmName, sending, serverErrors, onSubmit }: Props
         <textarea id={`${id}-message`} rows={3} className="field-input" {...aria('message')} {...form.register('message')} />
       </Field>
       {/* People never see this field; form-filling software does. */}
-      <div aria-hidden="true" className="absolute -left-[9999px] h-px w-px overflow-hidden">
-        <label htmlFor={`${id}-website`}>Website</label>
-        <input id={`${id}-website`} name="website" tabIndex={-1} autoComplete="off" defaultValue="" />
-      </div>
+      {!wording && (
+        <div aria-hidden="true" className="absolute -left-[9999px] h-px w-px overflow-hidden">
+          <label htmlFor={`${id}-website`}>Website</label>
+          <input id={`${id}-website`} name="website" tabIndex={-1} autoComplete="off" defaultValue="" />
+        </div>
+      )}
       <div>
         <label className="flex items-start gap-2 text-sm">
           <input type="checkbox" className="mt-0.5 h-5 w-5 accent-[var(--brand)]" {...aria('consent')} {...form.register('consent')} />
-          <span>I agree that {firmName} may contact me about this inquiry.</span>
+          <span>{words.consent}</span>
         </label>
         {message('consent') && (
           <p id={`${id}-consent-error`} className="field-error">
@@ -100,7 +116,7 @@ export function ContactStep({ firmName, sending, serverErrors, onSubmit }: Props
         className="w-full rounded-md bg-[var(--brand)] px-4 py-3 font-medium text-[var(--brand-text)] disabled:opacity-60"
         disabled={sending}
       >
-        {sending ? 'Sending…' : `Send to ${firmName}`}
+        {sending ? words.sending : words.submit}
       </button>
     </form>
   );

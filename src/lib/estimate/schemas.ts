@@ -418,6 +418,26 @@ const spreadSchema = (label: string) => z.strictObject({ below: fraction(`${labe
 const methodSpreadSchema = (label: string) =>
   z.strictObject({ withPhotos: spreadSchema(`${label} with photos`), withoutPhotos: spreadSchema(`${label} without photos`) });
 
+/**
+ * How much each reason counts towards an inquiry's triage score (points; the score is scaled to 0–100
+ * by their sum). Defaults until the rate book has a screen for them; the numbers are our own starting
+ * point (common practice, no source): a job in the area, of a worthwhile size, described with photos
+ * and a tape, answered on time.
+ */
+export const triageWeightsSchema = z.strictObject({
+  serviceArea: num('Points for being inside the service area', '', 0, 100).default(20),
+  jobSize: num('Points for the size of the job', '', 0, 100).default(25),
+  /** The covered area that earns all the size points; smaller jobs earn their share. */
+  fullSizeSqFt: num('Covered area that earns all the size points', 'sq ft', 1, 100_000).default(300),
+  photos: num('Points for photos', '', 0, 100).default(15),
+  /** Photos that earn all the photo points. */
+  fullPhotos: count('Photos that earn all the photo points', 10).min(1, { error: 'At least one photo.' }).default(3),
+  measurement: num('Points for how the walls were measured', '', 0, 100).default(15),
+  response: num('Points for answering within the response target', '', 0, 100).default(25),
+});
+export type TriageWeights = z.output<typeof triageWeightsSchema>;
+export const DEFAULT_TRIAGE_WEIGHTS: TriageWeights = triageWeightsSchema.parse({});
+
 export const rateBookSchema = z
   .strictObject({
     units: choice('Units', ['imperial', 'metric'] as const),
@@ -478,6 +498,8 @@ export const rateBookSchema = z
       'homeowner-tape': methodSpreadSchema("Homeowner's tape"),
       'site-measure': methodSpreadSchema('Site measurement'),
     }),
+    /** Settings of the staff area rather than prices; optional, so every stored rate book still parses. */
+    triage: triageWeightsSchema.optional(),
   })
   .superRefine((rb, ctx) => {
     if (rb.labour.setupHoursPerVisit === undefined && rb.labour.setupHoursPerRoom === undefined) {

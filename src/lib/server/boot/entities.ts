@@ -7,6 +7,7 @@ import { LeadViewKey } from '../leads/lead-view-key.entity';
 import { MailTemplate } from '../leads/mail-template.entity';
 import { LostReasonList } from '../leads/lost-reason-list.entity';
 import { FollowUpReminder } from '../leads/follow-up-reminder.entity';
+import { InquiryDigest } from '../leads/inquiry-digest.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -35,4 +36,5 @@ export const entities = [
   PasswordReset,
   Invite,
   RateLimitEntry,
+  InquiryDigest,
 ];

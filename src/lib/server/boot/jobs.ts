@@ -3,7 +3,17 @@ import type { JobDefinition } from '../jobs/runner';
 import { mailDeliveryJob } from '../mail/delivery-job';
 import { abandonedPhotosJob } from '../photos/abandoned-photos';
 import { followUpRemindersJob } from '../leads/follow-up-reminders';
+import { purgeDeletedLeadsJob } from '../intake/purge-deleted-leads';
+import { morningDigestJob } from '../intake/morning-digest';
+import { overdueTriageJob } from '../leads/triage-refresh';
 
 // Each job has its own data type; the list holds them all.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const backgroundJobs: readonly JobDefinition<any>[] = [mailDeliveryJob, abandonedPhotosJob, followUpRemindersJob];
+export const backgroundJobs: readonly JobDefinition<any>[] = [
+  mailDeliveryJob,
+  abandonedPhotosJob,
+  followUpRemindersJob,
+  purgeDeletedLeadsJob,
+  morningDigestJob,
+  overdueTriageJob,
+];

@@ -10,6 +10,8 @@ import type { ContactMethod, LeadSource, LeadStage } from '~/lib/shared/labels';
 @Entity({ tableName: 'lead' })
 @Unique({ properties: ['company', 'idempotencyKey'] })
 @Index({ properties: ['company', 'createdAt'] })
+@Index({ properties: ['company', 'email'] })
+@Index({ properties: ['company', 'phone'] })
 export class Lead extends TenantEntity {
   /** Short code the homeowner and staff can read out on the phone (e.g. `K7MX-42QD`). */
   @Property({ type: 'string', length: 12 })
@@ -124,4 +126,12 @@ export class Lead extends TenantEntity {
   /** 0–100, higher is more promising; how it is worked out lives in `triage-score.ts`. */
   @Property({ type: 'smallint' })
   triageScore: number & Opt = 0;
+
+  /** An open inquiry of the same firm with the same e-mail or phone when this one came in (see `duplicates.ts`). */
+  @ManyToOne({ entity: 'Lead', deleteRule: 'set null', nullable: true })
+  duplicateOf: Lead | null = null;
+
+  /** Set when this inquiry was merged into another: its history moved there, and this row is kept as a pointer. */
+  @ManyToOne({ entity: 'Lead', deleteRule: 'cascade', nullable: true })
+  mergedInto: Lead | null = null;
 }

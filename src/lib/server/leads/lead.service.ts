@@ -20,6 +20,9 @@ import { roomChoices } from './room-choices';
 import { newLeadReference } from './lead-reference';
 import { recordLeadEvent } from './lead-events';
 import { viewKeyOpens } from './lead-view-keys';
+import { openLeadMatching } from './duplicates';
+import { newInquiryRecipients } from './new-inquiry-mail';
+import { refreshTriageScore } from './triage';
 
 const digest = (text: string) => createHash('sha256').update(text).digest('hex');
 
@@ -94,6 +97,8 @@ export async function createLead(
   const { result, version, view } = input.estimate;
   try {
     const lead = await em.transactional(async (tx) => {
+      // Looked up before the new row exists, so it can never match itself.
+      const duplicateOf = await openLeadMatching(tx, company.id, input.contact);
       const lead = tx.create(Lead, {
         company,
         reference: newLeadReference(),
@@ -115,7 +120,9 @@ export async function createLead(
         requestDigest,
         draftId: input.draftId ?? null,
         viewTokenHash: digest(viewToken),
+        duplicateOf,
       });
+      await refreshTriageScore(tx, lead);
       recordLeadEvent(tx, lead, 'received', { actorUserId: input.enteredByUserId ?? null, at: lead.createdAt, data: { source: lead.source } });
       await inTransaction?.(tx, lead);
 
@@ -124,7 +131,7 @@ export async function createLead(
       const confirmation = homeownerConfirmation(company, facts, view, leadViewUrl(lead.id, viewToken), choices);
       enqueueMail(tx, { to: lead.email, ...confirmation, companyId: company.id, fromName: company.name, replyTo: firmReplyTo(company) });
       const alert = newLeadAlert(company, facts, view, staffLeadUrl(lead.id), input.photoCount ?? 0, choices);
-      for (const to of company.notificationEmails) enqueueMail(tx, { to, ...alert, companyId: company.id, replyTo: lead.email });
+      for (const to of await newInquiryRecipients(tx, company.id)) enqueueMail(tx, { to, ...alert, companyId: company.id, replyTo: lead.email });
       await tx.flush();
       return lead;
     });

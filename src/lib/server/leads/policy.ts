@@ -10,4 +10,7 @@ export const canSeeLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInF
 export const canEditLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInFirm(viewer, ['owner', 'sales'], lead);
 /** Give it to someone on the team (or take it). */
 export const canAssignLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInFirm(viewer, ['owner', 'sales'], lead);
+/** Type in an inquiry taken on the phone. */
+export const canEnterLead = (viewer: Viewer, target?: FirmScoped): boolean => roleInFirm(viewer, ['owner', 'sales'], target);
+/** Delete one (soft) and restore it within the restore window. */
 export const canDeleteLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInFirm(viewer, ['owner'], lead);

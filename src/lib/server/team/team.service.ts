@@ -15,7 +15,15 @@ import { inviteMail } from './mails';
 /** An invitation link works for a week. common practice, no source. */
 export const INVITE_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
-export type TeamMember = { id: string; userId: string; name: string; email: string; role: Role };
+export type TeamMember = {
+  id: string;
+  userId: string;
+  name: string;
+  email: string;
+  role: Role;
+  /** Whether the firm's new-inquiry e-mail reaches them (their own choice on their account page). */
+  newInquiryMail: boolean;
+};
 export type PendingInvite = { id: string; email: string; role: Role; expiresAt: string };
 
 /** The firm's people and its invitations that are still open. */
@@ -25,7 +33,7 @@ export async function listTeam(em: EntityManager, companyId: string): Promise<{ 
     em.find(Invite, { company: companyId, acceptedAt: null, expiresAt: { $gt: now() } }, { orderBy: { createdAt: 'asc' } }),
   ]);
   return {
-    members: members.map((m) => ({ id: m.id, userId: m.user.id, name: m.user.name, email: m.user.email, role: m.role })),
+    members: members.map((m) => ({ id: m.id, userId: m.user.id, name: m.user.name, email: m.user.email, role: m.role, newInquiryMail: m.newInquiryMail })),
     invites: invites.map((i) => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString() })),
   };
 }
@@ -102,7 +110,7 @@ export async function changeRole(
     await endSessionsInFirm(tx, target.user.id, input.companyId, input.actingSessionToken);
     return target;
   });
-  return { id: member.id, userId: member.user.id, name: member.user.name, email: member.user.email, role: member.role };
+  return { id: member.id, userId: member.user.id, name: member.user.name, email: member.user.email, role: member.role, newInquiryMail: member.newInquiryMail };
 }
 
 /** Removes a member from this firm (their account stays for other firms) and ends their sessions here. */

@@ -1,4 +1,4 @@
-import { Entity, ManyToOne, Property, Unique } from '@mikro-orm/core';
+import { Entity, ManyToOne, Property, Unique, type Opt } from '@mikro-orm/core';
 import { TenantEntity } from '../companies/tenant.entity';
 import type { StaffRole } from '~/lib/shared/labels';
 import type { User } from './user.entity';
@@ -14,4 +14,8 @@ export class Membership extends TenantEntity {
 
   @Property({ type: 'string', length: 16 })
   role!: Role;
+
+  /** Whether the firm's new-inquiry e-mail reaches this person; on unless they opt out on their account page. */
+  @Property({ type: 'boolean' })
+  newInquiryMail: boolean & Opt = true;
 }
