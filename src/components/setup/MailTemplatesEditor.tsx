@@ -5,13 +5,13 @@
 import { useId, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { BODY_MAX, mailTemplateSchema, SUBJECT_MAX, type MailTemplateView } from '~/lib/shared/inquiry-work-schemas';
-import { sendJson, StaffApiError } from '../inquiries/page/staff-api';
+import { sendJson, RequestFailed } from '../inquiries/page/api';
 
 type Draft = { name: string; subject: string; body: string };
 const EMPTY: Draft = { name: '', subject: '', body: '' };
 
 function fieldErrors(error: unknown): { message: string; fields: Record<string, string> } {
-  const problem = error instanceof StaffApiError ? error : new StaffApiError(String(error), 0);
+  const problem = error instanceof RequestFailed ? error : new RequestFailed(String(error), 0);
   return { message: problem.message, fields: problem.fields };
 }
 

@@ -2,7 +2,7 @@
 import { useId, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { CALL_OUTCOMES, CALL_OUTCOME_LABELS, CALL_NOTE_MAX, callSchema, type CallOutcome } from '~/lib/shared/inquiry-work-schemas';
-import { announceLeadChanged, sendJson, StaffApiError } from './staff-api';
+import { announceLeadChanged, sendJson, RequestFailed } from './api';
 
 export function CallLog({ leadId }: { leadId: string }) {
   const id = useId();
@@ -29,7 +29,7 @@ export function CallLog({ leadId }: { leadId: string }) {
       setNote('');
       announceLeadChanged(leadId);
     } catch (error) {
-      const failure = error instanceof StaffApiError ? error : new StaffApiError(String(error), 0);
+      const failure = error instanceof RequestFailed ? error : new RequestFailed(String(error), 0);
       setErrors(failure.fields);
       setStatus({ kind: 'failed', text: failure.message });
     } finally {

@@ -8,7 +8,7 @@ import { useId, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { fillPlaceholders, type PlaceholderValues } from '~/lib/shared/mail-placeholders';
 import { BODY_MAX, leadEmailSchema, SUBJECT_MAX, type MailTemplateView } from '~/lib/shared/inquiry-work-schemas';
-import { announceLeadChanged, sendJson, StaffApiError } from './staff-api';
+import { announceLeadChanged, sendJson, RequestFailed } from './api';
 
 type Props = {
   leadId: string;
@@ -57,7 +57,7 @@ export function EmailComposer({ leadId, to, templates, values, templatesHref }: 
       setBody('');
       announceLeadChanged(leadId);
     } catch (failure) {
-      const problem = failure instanceof StaffApiError ? failure : new StaffApiError(String(failure), 0);
+      const problem = failure instanceof RequestFailed ? failure : new RequestFailed(String(failure), 0);
       setErrors(problem.fields);
       setStatus({ kind: 'failed', text: problem.message });
     } finally {

@@ -6,7 +6,7 @@ import { useId, useRef, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { mentionedIn, mentionQueryAt, type Mentionable } from '~/lib/shared/mentions';
 import { NOTE_MAX, noteSchema } from '~/lib/shared/inquiry-work-schemas';
-import { announceLeadChanged, sendJson, StaffApiError } from './staff-api';
+import { announceLeadChanged, sendJson, RequestFailed } from './api';
 
 /** At most this many names in the list at once. common practice, no source. */
 const MAX_OFFERED = 6;
@@ -80,7 +80,7 @@ export function NoteEditor({ leadId, teammates }: { leadId: string; teammates: M
       setCaret(0);
       announceLeadChanged(leadId);
     } catch (failure) {
-      const problem = failure instanceof StaffApiError ? failure : new StaffApiError(String(failure), 0);
+      const problem = failure instanceof RequestFailed ? failure : new RequestFailed(String(failure), 0);
       setError(problem.fields.text ?? null);
       setStatus({ kind: 'failed', text: problem.message });
     } finally {

@@ -7,7 +7,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { refreshDelayMs, type GalleryAnswer } from '~/lib/shared/gallery';
-import { getJson } from './staff-api';
+import { getJson } from './api';
 
 export function PhotoGallery({ leadId, initial }: { leadId: string; initial: GalleryAnswer }) {
   const id = useId();

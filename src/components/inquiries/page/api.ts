@@ -27,6 +27,7 @@ async function call<T>(method: string, url: string, body?: unknown): Promise<T> 
     if (error instanceof TypeError) throw new RequestFailed(UNREACHABLE, 0);
     throw error;
   }
+  if (response.status === 204) return undefined as T;
   const answer = (await response.json().catch((error: unknown) => {
     if (error instanceof SyntaxError) return {};
     throw error;
@@ -36,7 +37,7 @@ async function call<T>(method: string, url: string, body?: unknown): Promise<T> 
 }
 
 export const getJson = <T>(url: string) => call<T>('GET', url);
-export const sendJson = <T>(method: 'POST' | 'PUT', url: string, body?: unknown) => call<T>(method, url, body);
+export const sendJson = <T>(method: 'POST' | 'PUT' | 'PATCH' | 'DELETE', url: string, body?: unknown) => call<T>(method, url, body);
 
 /**
  * The inquiry's timeline and workflow state, shared by the page's islands through SWR's cache:
@@ -51,4 +52,9 @@ export async function act(leadId: string, method: 'POST' | 'PUT', url: string, b
   const view = await sendJson<TimelineView>(method, url, body);
   await mutate(timelineUrl(leadId), view, { revalidate: false });
   return view;
+}
+
+/** After a change made elsewhere on the page (a call, a note, an e-mail), the timeline loads again. */
+export function announceLeadChanged(leadId: string): void {
+  void mutate(timelineUrl(leadId));
 }

@@ -1,4 +1,6 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Lead } from './lead.entity';
+import { refreshTriageScore } from './triage';
 
 /**
  * A call logged or an e-mail sent to the homeowner: the first one sets `firstContactAt` (which ends
@@ -6,9 +8,12 @@ import type { Lead } from './lead.entity';
  *
  * Any logged call counts, answered or not (voicemail, no answer): the firm's response time
  * measures how soon the firm answered the inquiry, and a call the homeowner missed was that answer.
- * The inquiry page says so beside the call log.
+ * The inquiry page says so beside the call log. The triage score's "response so far" reason
+ * depends on the first contact, so the stored score is worked out again with it.
  */
-export function noteContact(lead: Lead, at: Date): void {
+export async function noteContact(em: EntityManager, lead: Lead, at: Date): Promise<void> {
+  const first = !lead.firstContactAt;
   lead.firstContactAt ??= at;
   if (!lead.lastContactAt || lead.lastContactAt < at) lead.lastContactAt = at;
+  if (first) await refreshTriageScore(em, lead, at);
 }

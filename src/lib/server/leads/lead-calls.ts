@@ -18,7 +18,7 @@ export async function logCall(em: EntityManager, input: LoggedCall): Promise<Lea
   return em.transactional(async (tx) => {
     const lead = await leadOfCompany(tx, input.companyId, input.leadId);
     const at = now();
-    noteContact(lead, at);
+    await noteContact(tx, lead, at);
     const data: Record<string, unknown> = { outcome: input.outcome };
     if (input.note) data.note = input.note;
     const event = recordLeadEvent(tx, lead, 'call', { actorUserId: input.callerUserId, at, data });

@@ -73,7 +73,7 @@ export async function sendLeadEmail(em: EntityManager, input: LeadEmail): Promis
       replyTo: firmReplyTo(company),
     });
     const at = now();
-    noteContact(lead, at);
+    await noteContact(tx, lead, at);
     // Kept without the link's key: the database holds keys only as hashes.
     const kept = fillPlaceholders(input.body, { ...values, estimate_link: KEPT_LINK_TEXT });
     const data: Record<string, unknown> = { subject, to: lead.email, mailId: mail.id, body: kept };
