@@ -224,8 +224,9 @@ describe('undo from the history', () => {
     const received = back.body.events.find((e: { kind: string }) => e.kind === 'received');
     expect(await undo(sales, lead.id, received.id)).toMatchObject({ status: 409, body: { error: 'Only stage moves and assignments can be undone.' } });
     expect(await undo(other, lead.id, lastEvent(given.body).id)).toMatchObject({ status: 404 });
-    const otherLead = buildLead(em(), sales.company.id);
-    await em().persistAndFlush(otherLead);
+    const fork = em();
+    const otherLead = buildLead(fork, sales.company.id);
+    await fork.flush();
     expect(await undo(sales, otherLead.id, lastEvent(given.body).id)).toMatchObject({ status: 404 });
     expect(await undo(sales, lead.id, 'not-an-id')).toMatchObject({ status: 404 });
   });
