@@ -22,6 +22,7 @@ import { validateProject } from './validate.ts';
 import { skirtStock } from './stair-checks.ts';
 import { columnRakeCuts, developed, footFirst, liftAt, rakedColumnTop, rakeOf, runRakeCuts, undeveloped, type Rake } from './stair-takeoff.ts';
 import { rakedBandArea, skirtLength, stairNotes } from './stair-wall.ts';
+import { fromStairFoot, spreadEvenly } from './upright-positions.ts';
 import { proudOfStool, stoolAndApronSqIn, windowsWithStoolInBand } from './window-stool.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
@@ -259,7 +260,7 @@ function uprightEdgesToCaulk(ctx: WallContext, x: number, w: number, y0: number,
   return (shared(x) ? 0 : 1) + (shared(x + w) ? 0 : 1);
 }
 
-/** Vertical members (battens or stiles) spread evenly, one at each wall end, no more than `spacing` apart on centre. */
+/** Vertical members (battens or stiles), one at each wall end, no more than `spacing` apart on centre (upright-positions.ts). */
 function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
   const w = board.width;
   if (top - bottom < MIN_PIECE) return;
@@ -284,12 +285,14 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
           w - 1e-9,
         ),
   );
+  const rake = ctx.rake;
   for (const [a, b] of [...subtractIntervals([0, ctx.length], blocked, w - 1e-9), ...underSills]) {
-    const run = b - a;
-    const n = run <= 2 * w ? 1 : Math.ceil((run - w) / spacing - 1e-9) + 1;
-    const pitch = n > 1 ? (run - w) / (n - 1) : 0;
-    for (let i = 0; i < n; i++) {
-      const x = a + i * pitch;
+    // On a stair wall the stretch that holds the stair is set out from its foot: spread evenly, a
+    // longer stretch would move every upright over the stair and change its long point
+    // (docs/sources.md §43). No opening sits over the stair, so one stretch holds all of it.
+    const holdsStair = rake !== undefined && a <= rake.span[0] + 1e-9 && b >= rake.span[1] - 1e-9;
+    const xs = holdsStair ? fromStairFoot(a, b, w, spacing, rake.span[1] - rake.span[0], rake.stair.startsAt) : spreadEvenly(a, b, w, spacing);
+    for (const x of xs) {
       for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
         let y = y0;
         for (const len of splitFull(y1 - y0, board.length)) {
