@@ -172,8 +172,8 @@ interface RunPlan {
 }
 
 /** Boards (or sheets) across a run, set out from the left end or balanced, as the treatment says. */
-function runPlan(t: Treatment, runLength: number, width: number, gap: number): RunPlan {
-  if (t.layout === 'balanced') {
+function runPlan(layout: Treatment['layout'], runLength: number, width: number, gap: number): RunPlan {
+  if (layout === 'balanced') {
     const run = balancedRun(runLength, width, gap);
     const positions = positionsOf(run, width, gap).map((p) => ({ start: p.start, width: p.width, ripped: p.width < width - 1e-6 }));
     return { layout: { count: run.count, lastWidth: run.endWidth, leftover: 0, firstWidth: run.endWidth }, positions };
@@ -187,10 +187,19 @@ function runPlan(t: Treatment, runLength: number, width: number, gap: number): R
   return { layout: run, positions };
 }
 
+/**
+ * How columns of boards, strips or panels are set out along the wall. On a stair wall they go from
+ * the stair's foot, full widths first, whatever the treatment says: balanced ends would move every
+ * column over the stair as the wall grew and change its long point (docs/sources.md §43).
+ */
+function columnLayout(ctx: WallContext, t: Treatment): Treatment['layout'] {
+  return ctx.rake ? 'from-left' : t.layout;
+}
+
 /** Panels or backing sheets laid side by side across the wall, full sheet width, butted. */
 function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel', t: Treatment): void {
   const longSide = Math.max(sheet.width, sheet.height);
-  for (const col of footFirst(ctx.rake, ctx.length, runPlan(t, ctx.length, sheet.width, 0).positions)) {
+  for (const col of footFirst(ctx.rake, ctx.length, runPlan(columnLayout(ctx, t), ctx.length, sheet.width, 0).positions)) {
     const slices = columnSlices(ctx, col.start, col.start + col.width);
     for (const sl of slices) {
       for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.ripped });
@@ -219,7 +228,7 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
     cut(len);
   };
   if (t.orientation === 'vertical') {
-    const plan = runPlan(t, ctx.length, faceWidth, t.gap);
+    const plan = runPlan(columnLayout(ctx, t), ctx.length, faceWidth, t.gap);
     footFirst(ctx.rake, ctx.length, plan.positions).forEach((b) => {
       const ripped = b.ripped;
       const slices = columnSlices(ctx, b.start, b.start + b.width);
@@ -230,7 +239,7 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
     return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
   }
   const height = ctx.bandTop - ctx.bandBottom;
-  const plan = runPlan(t, height, faceWidth, t.gap);
+  const plan = runPlan(t.layout, height, faceWidth, t.gap);
   // Joints on studs, clear of the joints in the row below (staggered-joints.ts).
   let below: number[] = [];
   plan.positions.forEach((b) => {
@@ -641,6 +650,11 @@ function wallTakeoff(
     ctx.caulkFeet += (2 * v + across) / 12;
   }
 
+  if (rake && t.layout === 'balanced' && coversWall(t) && !(t.kind === 'shiplap' && t.orientation === 'horizontal')) {
+    notes.push(
+      `${label}: along a stair the boards or panels are set out from the foot of the stair, full widths first, rather than balanced between the wall's ends.`,
+    );
+  }
   if (boards && boards.firstWidth === undefined && boards.lastWidth < 1 && boards.count > 1) {
     notes.push(
       `The last board on ${label} is ripped to ${formatLength(boards.lastWidth, units)}; splitting the difference between the first and last boards looks better (common practice).`,
