@@ -149,6 +149,62 @@ describe('battens over a stair stay where they are as the wall grows', () => {
   });
 });
 
+describe('horizontal boards beyond a door on the landing are joined on the studs of the wall', () => {
+  // Found by the "more wall never costs less" property (common practice, no source: a longer stair never
+  // costs less in a wainscot): horizontal shiplap 24 in high in a room of a plain 292 in wall and a 292 in
+  // wall along a stair from its left end (rise 6 in, run 10 in) with a 32 in door on the landing at
+  // 72-1/4 in. The courses beyond the door were laid out along the nosing line, so their studs moved
+  // with the stair's length; with 6 steps instead of 4 the 30 board cuts fitted 24 lengths instead of
+  // 25 and the total fell from $1,950.75 to $1,934.72.
+  const room = (steps: number): ProjectInput => ({
+    rooms: [
+      {
+        name: 'Test room',
+        ceilingHeight: 120,
+        walls: [
+          { length: 292, outlets: 0 },
+          {
+            length: 292,
+            outlets: 0,
+            stair: { steps, rise: 6, run: 10, startsAt: 'left' },
+            openings: [{ kind: 'door', width: 32, height: 24, sillHeight: 0, offset: 72.25 }],
+          },
+        ],
+        treatment: { id: 'shiplap-horizontal', height: 'wainscot', wainscotHeight: 24 },
+      },
+    ],
+    builtBefore1978: 'no',
+    measuredBy: 'homeowner-estimate',
+    paint: false,
+  });
+  const noMinimum = { ...rateBook, minimumJobCents: 0 };
+  const beyondDoor = (steps: number): number[][] => {
+    const boards = estimate(room(steps), noMinimum).takeoff.rooms[0]!.walls[1]!.pieces.filter((p) => p.role === 'board' && p.x >= 106.5 - 1e-9);
+    const rows = [...new Set(boards.map((p) => p.y))];
+    return rows.map((y) => boards.filter((p) => p.y === y).map((p) => Math.round(p.width * 1000) / 1000));
+  };
+
+  it('the same courses beyond the door whatever the length of the stair', () => {
+    // Hand-worked. The door's casing (2-1/4 in, docs/sources.md §30) stops the courses at 106.5 in. Studs
+    // 16 in apart from the wall's left end (docs/sources.md §45); 8 ft boards: from 106.5 in the farthest
+    // stud in reach is 192 in (85.5 in), then 288 in (96 in) and the last 4 in. The next course keeps off
+    // the joint at 192 in: 176 in (69.5 in), 272 in (96 in), 20 in. Before, measured along the nosing line,
+    // the run began 40 × (√136 / 10 − 1) = 6.65 in further on with 4 steps and 9.97 in with 6.
+    const courses = [
+      [85.5, 96, 4],
+      [69.5, 96, 20],
+      [85.5, 96, 4],
+      [69.5, 96, 20],
+    ];
+    expect(beyondDoor(4)).toEqual(courses);
+    expect(beyondDoor(6)).toEqual(courses);
+  });
+
+  it('so two more steps cost no less', () => {
+    expect(estimate(room(6), noMinimum).price.totalCents).toBeGreaterThanOrEqual(estimate(room(4), noMinimum).price.totalCents);
+  });
+});
+
 describe('a full-height stair wall in vertical plywood strips', () => {
   const t = takeoff(stairHall('shiplap-vertical-ply', 'full'), catalogue);
   const wall = t.rooms[0]!.walls[0]!;

@@ -339,8 +339,12 @@ function layRail(ctx: WallContext, board: BoardStock, y: number, edgesToCaulk: 1
 
 /**
  * The pieces of one run [x0, x1] across the wall, joined on studs clear of the joints `below`. On a
- * stair wall a run that follows the rake is laid out along the nosing line, so its pieces have their
+ * stair wall a run that meets the rake is laid out along the nosing line, so its pieces have their
  * true lengths (`len`) while `x` and `width` stay on the wall for drawings; its rake cuts are counted.
+ * A run on a stair wall that does not meet the rake (beyond a door on the landing) is laid out on the
+ * wall, its studs counted from the wall's left end as on any wall: measured along the nosing line, its
+ * studs would shift with the stair's length, and a stair with more steps could cost less
+ * (docs/sources.md §43).
  */
 function rowRun(
   ctx: WallContext,
@@ -350,10 +354,12 @@ function rowRun(
   below: number[],
   level: boolean,
 ): { pieces: Array<{ x: number; width: number; len: number }>; joints: number[] } {
-  const r = level ? undefined : ctx.rake;
+  const onRake = !level && ctx.rake !== undefined && Math.min(x1, ctx.rake.span[1]) - Math.max(x0, ctx.rake.span[0]) > 1e-9;
+  const r = onRake ? ctx.rake : undefined;
   const u0 = r ? developed(r, x0) : x0;
   const u1 = r ? developed(r, x1) : x1;
-  const row = staggeredRow({ x0: u0, x1: u1, stock, studSpacing: ctx.catalogue.studSpacing, below });
+  // Joints are kept in wall positions, so the rows above compare them whichever frame their runs use.
+  const row = staggeredRow({ x0: u0, x1: u1, stock, studSpacing: ctx.catalogue.studSpacing, below: r ? below.map((x) => developed(r, x)) : below });
   const pieces: Array<{ x: number; width: number; len: number }> = [];
   let u = u0;
   for (const len of row.pieces) {
@@ -363,7 +369,7 @@ function rowRun(
     u += len;
   }
   if (r) ctx.rakeCuts += runRakeCuts(r, x0, x1);
-  return { pieces, joints: row.joints };
+  return { pieces, joints: r ? row.joints.map((j) => undeveloped(r, j)) : row.joints };
 }
 
 /** A stretch of wall that takes a line of frames: between openings, or under one window's sill. */
