@@ -149,3 +149,56 @@ describe('balanced layouts in the takeoff', () => {
     expect(estimate(b, rb).price.totalCents).toBeGreaterThanOrEqual(estimate(a, rb).price.totalCents);
   });
 });
+
+describe('a balanced treatment on a stair wall', () => {
+  // Found by the "more wall never costs less" property (common practice, no source: a bigger job never
+  // costs less): full-height beadboard, balanced, in a room of a plain wall and a wall along a 7-step
+  // stair (rise 7 in, run 10 in) from its left end, ceiling 181 in. Balanced, the stair wall's end
+  // panels widened from 44-1/2 in to 45-1/2 in as the walls grew from 425 to 427 in, every panel over
+  // the stair moved, and the total fell from $6,222.81 to $6,187.72.
+  const rb = { ...parseRateBook(balancedBook()), minimumJobCents: 0 };
+  const room = (length: number): ProjectInput => ({
+    rooms: [
+      {
+        name: 'Stair hall',
+        ceilingHeight: 181,
+        walls: [{ length }, { length, stair: { steps: 7, rise: 7, run: 10, startsAt: 'left' } }],
+        treatment: { id: 'beadboard', height: 'full' },
+      },
+    ],
+    builtBefore1978: 'no',
+    measuredBy: 'homeowner-estimate',
+  });
+  const panels = (length: number) =>
+    estimate(room(length), rb)
+      .takeoff.rooms[0]!.walls[1]!.pieces.filter((p) => p.role === 'panel')
+      .map((p) => ({ x: p.x, width: p.width, height: Math.round(p.height * 1000) / 1000 }));
+
+  it('sets the panels out from the foot of the stair, full widths first, and says so', () => {
+    // Hand-worked: 48 in panels from the foot; the stair runs 7 × 10 = 70 in and climbs 49 in, 0.7 in
+    // per inch, over the 5-1/2 in skirt (docs/sources.md §42). Full height to the level 181 in ceiling:
+    // 0–48 in from the skirt at its low side, 181 − 5.5 = 175.5 in; 48–96 in from the nosing at 48 in
+    // (33.6 in), 141.9 in; beyond the stair's top, 181 − 5.5 − 49 = 126.5 in. At 425 in: eight whole
+    // panels and the rip at the far end, 425 − 384 = 41 in; at 427 in, 43 in. The plain wall stays balanced.
+    for (const [length, rip] of [
+      [425, 41],
+      [427, 43],
+    ] as const) {
+      const p = panels(length);
+      expect(p.slice(0, 3)).toEqual([
+        { x: 0, width: 48, height: 175.5 },
+        { x: 48, width: 48, height: 141.9 },
+        { x: 96, width: 48, height: 126.5 },
+      ]);
+      expect(p).toHaveLength(9);
+      expect(p.at(-1)).toEqual({ x: 384, width: rip, height: 126.5 });
+    }
+    const e = estimate(room(425), rb);
+    expect(e.takeoff.rooms[0]!.walls[0]!.pieces.find((p) => p.role === 'panel')!.width).toBe(44.5);
+    expect(e.takeoff.notes.some((n) => /Stair hall: Wall 2: along a stair .* set out from the foot of the stair/.test(n))).toBe(true);
+  });
+
+  it('so the longer walls cost no less', () => {
+    expect(estimate(room(427), rb).price.totalCents).toBeGreaterThanOrEqual(estimate(room(425), rb).price.totalCents);
+  });
+});

@@ -1,5 +1,6 @@
 import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
+import { FIXTURE_KINDS } from './schemas.ts';
 import { estimate, EstimateInputError, formatMoney, parseRateBook, projectSchema, sampleProject, sampleRateBook, type ProjectInput } from './index.ts';
 import { fieldsOf } from './input-refusal.testing.ts';
 
@@ -189,8 +190,32 @@ describe('properties of the price', () => {
       height: fc.integer({ min: 24, max: 84 }),
       sillHeight: fc.integer({ min: 0, max: 48 }),
       offset: fc.integer({ min: 0, max: 300 }),
+      // A casing of its own, else the rate book's (docs/sources.md §30).
+      casingWidth: fc.integer({ min: 0, max: 4 }),
     },
     { requiredKeys: ['kind'] },
+  );
+  // Fixtures that take wall length (docs/sources.md §20), sized and placed or left to the defaults.
+  const fixture = fc.record(
+    {
+      kind: fc.constantFrom(...FIXTURE_KINDS),
+      width: fc.integer({ min: 12, max: 72 }),
+      offset: fc.integer({ min: 0, max: 300 }),
+    },
+    { requiredKeys: ['kind'] },
+  );
+  // Doors and windows on the level part of a stair wall, each given its distance from the stair's top
+  // (or from the one before it): they must stay off the stair in every variant (docs/sources.md §43).
+  const stairOpening = fc.record(
+    {
+      kind: fc.constantFrom('door' as const, 'window' as const),
+      width: fc.integer({ min: 18, max: 48 }),
+      height: fc.integer({ min: 24, max: 84 }),
+      sillHeight: fc.integer({ min: 0, max: 48 }),
+      gap: fc.integer({ min: 0, max: 48 }),
+      casingWidth: fc.option(fc.integer({ min: 0, max: 4 }), { nil: undefined }),
+    },
+    { requiredKeys: ['kind', 'width', 'height', 'sillHeight', 'gap'] },
   );
   const grown = fc.record({
     length: fc.integer({ min: 60, max: 480 }),
@@ -202,7 +227,10 @@ describe('properties of the price', () => {
     walls: fc.integer({ min: 1, max: 4 }),
     moreWalls: fc.integer({ min: 0, max: 2 }),
     openings: fc.array(opening, { maxLength: 3 }),
+    fixtures: fc.array(fixture, { maxLength: 2 }),
     treatment: fc.constantFrom(...treatments),
+    // Boards, strips and panels balanced between the wall's ends instead of laid from the left end.
+    balanced: fc.boolean(),
     height: fc.constantFrom('wainscot' as const, 'full' as const),
     outlets: fc.integer({ min: 0, max: 4 }),
     paint: fc.boolean(),
@@ -220,8 +248,24 @@ describe('properties of the price', () => {
       { nil: undefined },
     ),
     moreSteps: fc.integer({ min: 1, max: 2 }),
+    stairOpenings: fc.array(stairOpening, { maxLength: 2 }),
   });
   type Grown = typeof grown extends fc.Arbitrary<infer T> ? T : never;
+  // The stair wall's openings, measured from its left end on the drawn wall and kept there in every
+  // variant: past the top of the longest stair for a stair from the left end, before it from the right.
+  const stairWallOpenings = (c: Grown): ProjectInput['rooms'][number]['walls'][number]['openings'] => {
+    if (!c.stair) return [];
+    const longestRun = (c.stair.steps + c.moreSteps) * c.stair.run;
+    const fromLeft = c.stair.startsAt === 'right';
+    let edge = fromLeft ? c.length - longestRun : longestRun;
+    return c.stairOpenings.map(({ gap, ...o }) => {
+      const casing = o.casingWidth ?? rateBook.catalogue.casing.width;
+      const offset = fromLeft ? edge - gap - casing - o.width : edge + gap + casing;
+      edge = fromLeft ? offset - casing : offset + o.width + casing;
+      // On the landing of the longest stair its top stays under the ceiling (the room is that much taller).
+      return { ...o, height: Math.min(o.height, c.ceiling - o.sillHeight), offset };
+    });
+  };
   const room = (
     c: Grown,
     length: number,
@@ -242,8 +286,18 @@ describe('properties of the price', () => {
             length,
             outlets: c.outlets + (more.outlets ?? 0),
             openings: i === 0 ? c.openings.map((o) => ({ ...o, ...(o.offset !== undefined ? { count: 1 } : {}) })) : [],
+            fixtures: i === 0 ? c.fixtures : [],
           })),
-          ...(c.stair ? [{ length, outlets: c.outlets + (more.outlets ?? 0), stair: { ...c.stair, steps: c.stair.steps + (more.steps ?? 0) } }] : []),
+          ...(c.stair
+            ? [
+                {
+                  length,
+                  outlets: c.outlets + (more.outlets ?? 0),
+                  stair: { ...c.stair, steps: c.stair.steps + (more.steps ?? 0) },
+                  openings: stairWallOpenings(c),
+                },
+              ]
+            : []),
         ],
         treatment: {
           id: c.treatment,
@@ -259,9 +313,13 @@ describe('properties of the price', () => {
   });
   // Without a minimum job, which would hide most small jobs' differences.
   const noMinimum = { ...rateBook, minimumJobCents: 0 };
-  const priced = (p: ProjectInput) => {
+  const balancedBook = {
+    ...noMinimum,
+    catalogue: { ...noMinimum.catalogue, treatments: noMinimum.catalogue.treatments.map((t) => ({ ...t, layout: 'balanced' as const })) },
+  };
+  const priced = (p: ProjectInput, balanced = false) => {
     try {
-      return estimate(p, noMinimum).price;
+      return estimate(p, balanced ? balancedBook : noMinimum).price;
     } catch (e) {
       if (e instanceof EstimateInputError) return undefined;
       throw e;
@@ -284,7 +342,7 @@ describe('properties of the price', () => {
   fcTest.prop([grown], { numRuns: Number(process.env.MORE_WALL_RUNS ?? 120), ...(moreWallSeed === undefined ? {} : { seed: moreWallSeed }) })(
     'more wall never costs less',
     (c) => {
-      const a = priced(room(c, c.length, c.ceiling, c.walls));
+      const a = priced(room(c, c.length, c.ceiling, c.walls), c.balanced);
       fc.pre(a !== undefined);
       for (const bigger of [
         room(c, c.length + c.more, c.ceiling, c.walls),
@@ -301,9 +359,9 @@ describe('properties of the price', () => {
         // A taller given wainscot (the same as the ceiling's own when none is given).
         room(c, c.length, c.ceiling, c.walls, { wainscot: c.taller }),
       ]) {
-        const b = priced(bigger);
+        const b = priced(bigger, c.balanced);
         // Every opening that fits a wall fits a longer, taller one.
-        expect(b).toBeDefined();
+        expect(b, JSON.stringify(bigger.rooms[0]!.walls.map((w) => [w.length, w.stair?.steps]))).toBeDefined();
         expect(b!.totalCents).toBeGreaterThanOrEqual(a!.totalCents);
         expect(b!.lowCents).toBeGreaterThanOrEqual(a!.lowCents);
         expect(b!.highCents).toBeGreaterThanOrEqual(a!.highCents);

@@ -49,10 +49,12 @@ describe('a stair wall in board and batten, wainscot 36 in above the nosing (han
     // Backing columns of the 48 in sheet from the left: 0–48 and 48–96 climb 48 × 0.75 = 36 in → 30.5 + 36 = 66.5 in;
     // 96–144 climbs from 72 to the top of the stair at 90 → 30.5 + 18 = 48.5 in; 144–168 is level → 30.5 in.
     expect(heights('panel')).toEqual([66.5, 66.5, 48.5, 30.5]);
-    // Battens (1x3, 2-1/2 in) under the 1x4 top rail (3-1/2 in): 36 − 3.5 − 5.5 = 27 in square. Twelve spread
-    // over 168 in (ceil(165.5 / 16) + 1 = 12, 15.045 in apart); the first eight (x ≤ 105.3) sit on the rake and
-    // take 2.5 × 0.75 = 1.875 in more: 28.875 in; the last four (x ≥ 120.4) are on the level part: 27 in.
+    // Battens (1x3, 2-1/2 in) under the 1x4 top rail (3-1/2 in): 36 − 3.5 − 5.5 = 27 in square. From the
+    // stair's foot at the 16 in spacing, the eight that start on the 120 in stair (0, 16 … 112; the last
+    // ends at 114.5) take 2.5 × 0.75 = 1.875 in more: 28.875 in. The level rest, 128–168 in, is spread
+    // evenly: ceil((40 − 2.5) / 16) + 1 = 4 at 128, 140.5, 153 and 165.5 in, 27 in each.
     expect(heights('batten')).toEqual([...Array(8).fill(28.875), ...Array(4).fill(27)]);
+    expect(wall.pieces.filter((p) => p.role === 'batten').map((p) => p.x)).toEqual([0, 16, 32, 48, 64, 80, 96, 112, 128, 140.5, 153, 165.5]);
   });
 
   it('runs the top rail and the cap rail along the rake at their true length', () => {
@@ -84,6 +86,122 @@ describe('a stair wall in board and batten, wainscot 36 in above the nosing (han
   it('gives no code note for a stair inside the code limits', () => {
     // Source: docs/sources.md §41 — IRC R311.7.5: 7-1/2 in ≤ 7-3/4 in and 10 in ≥ 10 in.
     expect(e.takeoff.notes.some((n) => /residential code/.test(n))).toBe(false);
+  });
+});
+
+describe('battens over a stair stay where they are as the wall grows', () => {
+  // Found by the "more wall never costs less" property (common practice, no source: a bigger job never
+  // costs less): a board-and-batten wainscot 24 in high in a room of a plain 67 in wall and a 67 in wall
+  // along a 6-step stair (rise 6 in, run 9 in). Spread evenly, the stair wall's six battens moved apart
+  // as the wall grew, and the fifth slid off the top of the stair: its long point fell from 16.6 to
+  // 16.067 in, the twelve batten cuts fitted two 8 ft lengths instead of three, and the total fell
+  // from $707.38 at 67 in to $701.70 at 68 in.
+  const room = (length: number, startsAt: 'left' | 'right' = 'left'): ProjectInput => ({
+    rooms: [
+      {
+        name: 'Test room',
+        ceilingHeight: 120,
+        walls: [
+          { length, outlets: 0 },
+          { length, outlets: 0, stair: { steps: 6, rise: 6, run: 9, startsAt } },
+        ],
+        treatment: { id: 'board-and-batten', height: 'wainscot', wainscotHeight: 24 },
+      },
+    ],
+    builtBefore1978: 'no',
+    measuredBy: 'homeowner-estimate',
+  });
+  const noMinimum = { ...rateBook, minimumJobCents: 0 };
+  const battens = (e: ReturnType<typeof estimate>, wall: number) =>
+    e.takeoff.rooms[0]!.walls[wall]!.pieces.filter((p) => p.role === 'batten').map((p) => ({ x: p.x, height: Math.round(p.height * 1000) / 1000 }));
+
+  it('sets them out from the foot of the stair at the batten spacing, the level rest spread evenly', () => {
+    // Hand-worked. The stair runs 6 × 9 = 54 in and climbs 6/9 in per inch. Battens (1x3, 2-1/2 in,
+    // docs/sources.md §42) stand on the 1x6 skirt (5-1/2 in) under the 1x4 top rail (3-1/2 in):
+    // 24 − 3.5 − 5.5 = 15 in square; over the stair 2.5 × 6/9 = 1-2/3 in more, 16.667 in at the long
+    // point. From the foot at the 16 in spacing: 0, 16, 32 and 48 in start on the stair (48 + 2.5 = 50.5
+    // is still on it). The level rest starts at the next pitch, 64 in: 3 in at 67 in and 4 in at 68 in,
+    // no more than two battens wide, so one batten at 64 in, 15 in long. The same five at both lengths.
+    for (const length of [67, 68]) {
+      expect(battens(estimate(room(length), noMinimum), 1)).toEqual([
+        { x: 0, height: 16.667 },
+        { x: 16, height: 16.667 },
+        { x: 32, height: 16.667 },
+        { x: 48, height: 16.667 },
+        { x: 64, height: 15 },
+      ]);
+    }
+  });
+
+  it('so the longer wall costs no less', () => {
+    // Batten cuts at both lengths: the plain wall's six (ceil((67 − 2.5) / 16) + 1 = 6) of
+    // 24 − 3.5 − 5.25 (baseboard) = 15.25 in, and the stair wall's 4 × 16.667 + 15 in: 173.17 in with
+    // eleven 1/8 in kerfs, two 8 ft lengths (computed here).
+    const [at67, at68] = [estimate(room(67), noMinimum), estimate(room(68), noMinimum)];
+    for (const e of [at67, at68]) expect(e.takeoff.materials.find((m) => m.id === 'board:mdf-1x3-8')?.quantity).toBe(2);
+    expect(at67.price.totalCents).toBe(69869);
+    expect(at68.price.totalCents).toBe(70170);
+  });
+
+  it('mirrors the layout for a stair that starts at the right end', () => {
+    // The same battens measured from the right end: x = 67 − s − 2.5 for s = 0, 16, 32, 48, 64.
+    expect(battens(estimate(room(67, 'right'), noMinimum), 1).map((b) => b.x)).toEqual([64.5, 48.5, 32.5, 16.5, 0.5]);
+  });
+});
+
+describe('horizontal boards beyond a door on the landing are joined on the studs of the wall', () => {
+  // Found by the "more wall never costs less" property (common practice, no source: a longer stair never
+  // costs less in a wainscot): horizontal shiplap 24 in high in a room of a plain 292 in wall and a 292 in
+  // wall along a stair from its left end (rise 6 in, run 10 in) with a 32 in door on the landing at
+  // 72-1/4 in. The courses beyond the door were laid out along the nosing line, so their studs moved
+  // with the stair's length; with 6 steps instead of 4 the 30 board cuts fitted 24 lengths instead of
+  // 25 and the total fell from $1,950.75 to $1,934.72.
+  const room = (steps: number): ProjectInput => ({
+    rooms: [
+      {
+        name: 'Test room',
+        ceilingHeight: 120,
+        walls: [
+          { length: 292, outlets: 0 },
+          {
+            length: 292,
+            outlets: 0,
+            stair: { steps, rise: 6, run: 10, startsAt: 'left' },
+            openings: [{ kind: 'door', width: 32, height: 24, sillHeight: 0, offset: 72.25 }],
+          },
+        ],
+        treatment: { id: 'shiplap-horizontal', height: 'wainscot', wainscotHeight: 24 },
+      },
+    ],
+    builtBefore1978: 'no',
+    measuredBy: 'homeowner-estimate',
+    paint: false,
+  });
+  const noMinimum = { ...rateBook, minimumJobCents: 0 };
+  const beyondDoor = (steps: number): number[][] => {
+    const boards = estimate(room(steps), noMinimum).takeoff.rooms[0]!.walls[1]!.pieces.filter((p) => p.role === 'board' && p.x >= 106.5 - 1e-9);
+    const rows = [...new Set(boards.map((p) => p.y))];
+    return rows.map((y) => boards.filter((p) => p.y === y).map((p) => Math.round(p.width * 1000) / 1000));
+  };
+
+  it('the same courses beyond the door whatever the length of the stair', () => {
+    // Hand-worked. The door's casing (2-1/4 in, docs/sources.md §30) stops the courses at 106.5 in. Studs
+    // 16 in apart from the wall's left end (docs/sources.md §45); 8 ft boards: from 106.5 in the farthest
+    // stud in reach is 192 in (85.5 in), then 288 in (96 in) and the last 4 in. The next course keeps off
+    // the joint at 192 in: 176 in (69.5 in), 272 in (96 in), 20 in. Before, measured along the nosing line,
+    // the run began 40 × (√136 / 10 − 1) = 6.65 in further on with 4 steps and 9.97 in with 6.
+    const courses = [
+      [85.5, 96, 4],
+      [69.5, 96, 20],
+      [85.5, 96, 4],
+      [69.5, 96, 20],
+    ];
+    expect(beyondDoor(4)).toEqual(courses);
+    expect(beyondDoor(6)).toEqual(courses);
+  });
+
+  it('so two more steps cost no less', () => {
+    expect(estimate(room(6), noMinimum).price.totalCents).toBeGreaterThanOrEqual(estimate(room(4), noMinimum).price.totalCents);
   });
 });
 

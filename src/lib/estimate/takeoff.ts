@@ -22,6 +22,7 @@ import { validateProject } from './validate.ts';
 import { skirtStock } from './stair-checks.ts';
 import { columnRakeCuts, developed, footFirst, liftAt, rakedColumnTop, rakeOf, runRakeCuts, undeveloped, type Rake } from './stair-takeoff.ts';
 import { rakedBandArea, skirtLength, stairNotes } from './stair-wall.ts';
+import { fromStairFoot, spreadEvenly } from './upright-positions.ts';
 import { proudOfStool, stoolAndApronSqIn, windowsWithStoolInBand } from './window-stool.ts';
 import { bandTopFor, wallLength } from './wall-band.ts';
 
@@ -171,8 +172,8 @@ interface RunPlan {
 }
 
 /** Boards (or sheets) across a run, set out from the left end or balanced, as the treatment says. */
-function runPlan(t: Treatment, runLength: number, width: number, gap: number): RunPlan {
-  if (t.layout === 'balanced') {
+function runPlan(layout: Treatment['layout'], runLength: number, width: number, gap: number): RunPlan {
+  if (layout === 'balanced') {
     const run = balancedRun(runLength, width, gap);
     const positions = positionsOf(run, width, gap).map((p) => ({ start: p.start, width: p.width, ripped: p.width < width - 1e-6 }));
     return { layout: { count: run.count, lastWidth: run.endWidth, leftover: 0, firstWidth: run.endWidth }, positions };
@@ -186,10 +187,19 @@ function runPlan(t: Treatment, runLength: number, width: number, gap: number): R
   return { layout: run, positions };
 }
 
+/**
+ * How columns of boards, strips or panels are set out along the wall. On a stair wall they go from
+ * the stair's foot, full widths first, whatever the treatment says: balanced ends would move every
+ * column over the stair as the wall grew and change its long point (docs/sources.md §43).
+ */
+function columnLayout(ctx: WallContext, t: Treatment): Treatment['layout'] {
+  return ctx.rake ? 'from-left' : t.layout;
+}
+
 /** Panels or backing sheets laid side by side across the wall, full sheet width, butted. */
 function layPanels(ctx: WallContext, sheet: SheetStock, role: 'panel', t: Treatment): void {
   const longSide = Math.max(sheet.width, sheet.height);
-  for (const col of footFirst(ctx.rake, ctx.length, runPlan(t, ctx.length, sheet.width, 0).positions)) {
+  for (const col of footFirst(ctx.rake, ctx.length, runPlan(columnLayout(ctx, t), ctx.length, sheet.width, 0).positions)) {
     const slices = columnSlices(ctx, col.start, col.start + col.width);
     for (const sl of slices) {
       for (const [y0, y1] of sl.spans) ctx.pieces.push({ role, x: sl.x0, y: y0, width: sl.x1 - sl.x0, height: y1 - y0, ripped: col.ripped });
@@ -218,7 +228,7 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
     cut(len);
   };
   if (t.orientation === 'vertical') {
-    const plan = runPlan(t, ctx.length, faceWidth, t.gap);
+    const plan = runPlan(columnLayout(ctx, t), ctx.length, faceWidth, t.gap);
     footFirst(ctx.rake, ctx.length, plan.positions).forEach((b) => {
       const ripped = b.ripped;
       const slices = columnSlices(ctx, b.start, b.start + b.width);
@@ -229,7 +239,7 @@ function layShiplap(ctx: WallContext, t: Extract<Treatment, { kind: 'shiplap' }>
     return { orientation: 'vertical', boardWidth: faceWidth, gap: t.gap, ...plan.layout };
   }
   const height = ctx.bandTop - ctx.bandBottom;
-  const plan = runPlan(t, height, faceWidth, t.gap);
+  const plan = runPlan(t.layout, height, faceWidth, t.gap);
   // Joints on studs, clear of the joints in the row below (staggered-joints.ts).
   let below: number[] = [];
   plan.positions.forEach((b) => {
@@ -259,7 +269,7 @@ function uprightEdgesToCaulk(ctx: WallContext, x: number, w: number, y0: number,
   return (shared(x) ? 0 : 1) + (shared(x + w) ? 0 : 1);
 }
 
-/** Vertical members (battens or stiles) spread evenly, one at each wall end, no more than `spacing` apart on centre. */
+/** Vertical members (battens or stiles), one at each wall end, no more than `spacing` apart on centre (upright-positions.ts). */
 function layUprights(ctx: WallContext, board: BoardStock, spacing: number, bottom: number, top: number, role: 'batten' | 'stile'): void {
   const w = board.width;
   if (top - bottom < MIN_PIECE) return;
@@ -284,12 +294,14 @@ function layUprights(ctx: WallContext, board: BoardStock, spacing: number, botto
           w - 1e-9,
         ),
   );
+  const rake = ctx.rake;
   for (const [a, b] of [...subtractIntervals([0, ctx.length], blocked, w - 1e-9), ...underSills]) {
-    const run = b - a;
-    const n = run <= 2 * w ? 1 : Math.ceil((run - w) / spacing - 1e-9) + 1;
-    const pitch = n > 1 ? (run - w) / (n - 1) : 0;
-    for (let i = 0; i < n; i++) {
-      const x = a + i * pitch;
+    // On a stair wall the stretch that holds the stair is set out from its foot: spread evenly, a
+    // longer stretch would move every upright over the stair and change its long point
+    // (docs/sources.md §43). No opening sits over the stair, so one stretch holds all of it.
+    const holdsStair = rake !== undefined && a <= rake.span[0] + 1e-9 && b >= rake.span[1] - 1e-9;
+    const xs = holdsStair ? fromStairFoot(a, b, w, spacing, rake.span[1] - rake.span[0], rake.stair.startsAt) : spreadEvenly(a, b, w, spacing);
+    for (const x of xs) {
       for (const [y0, y1] of columnIntervals(ctx, x, x + w, bottom, top)) {
         let y = y0;
         for (const len of splitFull(y1 - y0, board.length)) {
@@ -327,8 +339,12 @@ function layRail(ctx: WallContext, board: BoardStock, y: number, edgesToCaulk: 1
 
 /**
  * The pieces of one run [x0, x1] across the wall, joined on studs clear of the joints `below`. On a
- * stair wall a run that follows the rake is laid out along the nosing line, so its pieces have their
+ * stair wall a run that meets the rake is laid out along the nosing line, so its pieces have their
  * true lengths (`len`) while `x` and `width` stay on the wall for drawings; its rake cuts are counted.
+ * A run on a stair wall that does not meet the rake (beyond a door on the landing) is laid out on the
+ * wall, its studs counted from the wall's left end as on any wall: measured along the nosing line, its
+ * studs would shift with the stair's length, and a stair with more steps could cost less
+ * (docs/sources.md §43).
  */
 function rowRun(
   ctx: WallContext,
@@ -338,10 +354,12 @@ function rowRun(
   below: number[],
   level: boolean,
 ): { pieces: Array<{ x: number; width: number; len: number }>; joints: number[] } {
-  const r = level ? undefined : ctx.rake;
+  const onRake = !level && ctx.rake !== undefined && Math.min(x1, ctx.rake.span[1]) - Math.max(x0, ctx.rake.span[0]) > 1e-9;
+  const r = onRake ? ctx.rake : undefined;
   const u0 = r ? developed(r, x0) : x0;
   const u1 = r ? developed(r, x1) : x1;
-  const row = staggeredRow({ x0: u0, x1: u1, stock, studSpacing: ctx.catalogue.studSpacing, below });
+  // Joints are kept in wall positions, so the rows above compare them whichever frame their runs use.
+  const row = staggeredRow({ x0: u0, x1: u1, stock, studSpacing: ctx.catalogue.studSpacing, below: r ? below.map((x) => developed(r, x)) : below });
   const pieces: Array<{ x: number; width: number; len: number }> = [];
   let u = u0;
   for (const len of row.pieces) {
@@ -351,7 +369,7 @@ function rowRun(
     u += len;
   }
   if (r) ctx.rakeCuts += runRakeCuts(r, x0, x1);
-  return { pieces, joints: row.joints };
+  return { pieces, joints: r ? row.joints.map((j) => undeveloped(r, j)) : row.joints };
 }
 
 /** A stretch of wall that takes a line of frames: between openings, or under one window's sill. */
@@ -638,6 +656,11 @@ function wallTakeoff(
     ctx.caulkFeet += (2 * v + across) / 12;
   }
 
+  if (rake && t.layout === 'balanced' && coversWall(t) && !(t.kind === 'shiplap' && t.orientation === 'horizontal')) {
+    notes.push(
+      `${label}: along a stair the boards or panels are set out from the foot of the stair, full widths first, rather than balanced between the wall's ends.`,
+    );
+  }
   if (boards && boards.firstWidth === undefined && boards.lastWidth < 1 && boards.count > 1) {
     notes.push(
       `The last board on ${label} is ripped to ${formatLength(boards.lastWidth, units)}; splitting the difference between the first and last boards looks better (common practice).`,
