@@ -24,6 +24,7 @@ const SAME_FIRM: Record<string, Record<StaffRole, boolean>> = {
   canEditLead: { owner: true, sales: true },
   canAssignLead: { owner: true, sales: true },
   canDeleteLead: { owner: true, sales: false },
+  canExportLeads: { owner: true, sales: false },
   canSeeRates: { owner: true, sales: false },
   canEditRates: { owner: true, sales: false },
   canPublishRates: { owner: true, sales: false },

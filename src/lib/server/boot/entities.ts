@@ -3,6 +3,7 @@ import { Company } from '../companies/company.entity';
 import { FunnelEvent } from '../embed/funnel-event.entity';
 import { Lead } from '../leads/lead.entity';
 import { LeadEvent } from '../leads/lead-event.entity';
+import { ListColumnChoice } from '../leads/list-column-choice.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -21,6 +22,7 @@ export const entities = [
   RateBookVersion,
   Lead,
   LeadEvent,
+  ListColumnChoice,
   LeadPhoto,
   FunnelEvent,
   Session,

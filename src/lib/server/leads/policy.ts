@@ -11,3 +11,5 @@ export const canEditLead = (viewer: Viewer, lead: FirmScoped): boolean => roleIn
 /** Give it to someone on the team (or take it). */
 export const canAssignLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInFirm(viewer, ['owner', 'sales'], lead);
 export const canDeleteLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInFirm(viewer, ['owner'], lead);
+/** The firm's inquiries as a file (names, phones, e-mails of every homeowner): the owner's call. */
+export const canExportLeads = (viewer: Viewer, target?: FirmScoped): boolean => roleInFirm(viewer, ['owner'], target);
