@@ -6,7 +6,15 @@
  */
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { TZDate } from '@date-fns/tz';
-import { DEFAULT_PAGE_SIZE, PRICE_BANDS, type InquiryColumn, type InquiryListPage, type InquiryListQuery, type InquiryRow } from '~/lib/shared/inquiry-list';
+import {
+  DEFAULT_PAGE_SIZE,
+  PRICE_BANDS,
+  inquiryListQuerySchema,
+  type InquiryColumn,
+  type InquiryListPage,
+  type InquiryListQuery,
+  type InquiryRow,
+} from '~/lib/shared/inquiry-list';
 import { LEAD_STAGE_IDS, type LeadStage } from '~/lib/shared/labels';
 import { now } from '../clock';
 import { Company } from '../companies/company.entity';
@@ -300,4 +308,25 @@ export async function* allInquiries(em: EntityManager, viewer: ListViewer, query
 export async function listViewerOf(em: EntityManager, staff: { companyId: string; membership: { id: string } }): Promise<ListViewer> {
   const company = await em.findOneOrFail(Company, { id: staff.companyId }, { fields: ['timeZone'] });
   return { companyId: staff.companyId, membershipId: staff.membership.id, timeZone: company.timeZone };
+}
+
+/**
+ * Previous and Next for the inquiry page opened from the list (`?in=<the list's view>`); null when
+ * it was not opened from the list or the view no longer parses.
+ */
+export async function neighboursFromListLink(
+  em: EntityManager,
+  staff: { companyId: string; membership: { id: string } },
+  inList: string | null,
+  leadId: string,
+): Promise<(Awaited<ReturnType<typeof neighboursInList>> & { href: (id: string) => string }) | null> {
+  if (inList === null) return null;
+  const params = new URLSearchParams(inList);
+  params.delete('after');
+  params.delete('limit');
+  const parsed = inquiryListQuerySchema.safeParse(Object.fromEntries(params.entries()));
+  if (!parsed.success) return null;
+  const found = await neighboursInList(em, await listViewerOf(em, staff), parsed.data, leadId);
+  const link = new URLSearchParams({ in: params.toString() }).toString();
+  return { ...found, href: (id) => `/app/leads/${id}?${link}` };
 }
