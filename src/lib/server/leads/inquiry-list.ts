@@ -182,19 +182,15 @@ function sqlDirection({ column, dir }: Ordering): 'asc' | 'desc' {
 
 const FROM = `from "lead" l left join "membership" m on m."id" = l."assignee_id" left join "app_user" au on au."id" = m."user_id"`;
 
-/**
- * Rows of the view strictly after (`after`) a (key, id) pair in the given SQL direction. The
- * query the list, the inquiry page's neighbours and the export all run.
- */
-async function selectRows(
-  em: EntityManager,
+/** The SQL and parameters of one keyset page of a view. */
+function selectSql(
   where: Where,
   ordering: Ordering,
   direction: 'asc' | 'desc',
   after: { key: string; id: string } | null,
   limit: number,
   at: Date,
-): Promise<RawRow[]> {
+): { sql: string; params: unknown[] } {
   const key = SORT_KEYS[ordering.column];
   const conditions = [...where.sql];
   const params = [...where.params];
@@ -212,7 +208,40 @@ async function selectRows(
     where ${conditions.join(' and ')}
     order by ${key.sql} ${direction}, l."id" ${direction}
     limit ?`;
-  return em.getConnection().execute<RawRow[]>(sql, [at, ...ENDED, ...params, limit]);
+  return { sql, params: [at, ...ENDED, ...params, limit] };
+}
+
+/**
+ * Rows of the view strictly after (`after`) a (key, id) pair in the given SQL direction. The
+ * query the list, the inquiry page's neighbours and the export all run.
+ */
+async function selectRows(
+  em: EntityManager,
+  where: Where,
+  ordering: Ordering,
+  direction: 'asc' | 'desc',
+  after: { key: string; id: string } | null,
+  limit: number,
+  at: Date,
+): Promise<RawRow[]> {
+  const { sql, params } = selectSql(where, ordering, direction, after, limit, at);
+  return em.getConnection().execute<RawRow[]>(sql, params);
+}
+
+/** PostgreSQL's plan for one page of a view, as run (EXPLAIN ANALYZE, BUFFERS): for `npm run bench` and for operators. */
+export async function explainInquiryPage(em: EntityManager, viewer: ListViewer, query: InquiryListQuery): Promise<string> {
+  const at = now();
+  const ordering = orderingOf(query);
+  const { sql, params } = selectSql(
+    viewWhere(viewer, query, at, { withStage: true }),
+    ordering,
+    sqlDirection(ordering),
+    cursorOf(query, ordering),
+    (query.limit ?? DEFAULT_PAGE_SIZE) + 1,
+    at,
+  );
+  const rows = await em.getConnection().execute<{ 'QUERY PLAN': string }[]>(`explain (analyze, buffers) ${sql}`, params);
+  return rows.map((row) => row['QUERY PLAN']).join('\n');
 }
 
 /** The cursor a request carried, checked against the view's sort. */
