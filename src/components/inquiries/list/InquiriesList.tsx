@@ -187,7 +187,7 @@ export default function InquiriesList({ initialView, initialPage, initialColumns
         id: 'received',
         header: 'Received',
         cell: ({ row }) => (
-          <time dateTime={fmt.isoDate(row.original.receivedAt)} title={fmt.date(row.original.receivedAt, 'dateTime')}>
+          <time dateTime={fmt.isoDate(row.original.receivedAt)} title={fmt.date(row.original.receivedAt, 'dateTime')} data-testid="lead-received">
             {fmt.date(row.original.receivedAt, 'day')}
           </time>
         ),
