@@ -44,6 +44,20 @@ const MATRIX: Row[] = [
   },
   { route: '/app/account', method: 'GET', path: () => '/app/account', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/api/app/me', method: 'GET', path: () => '/api/app/me', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
+  { route: '/api/app/leads', method: 'GET', path: () => '/api/app/leads?sort=name', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
+  // The other firm's owner exports their own firm's list: allowed, and none of the first firm's rows.
+  { route: '/api/app/leads/export', method: 'GET', path: () => '/api/app/leads/export', expect: { signedOut: 401, sales: 403, other: 200, owner: 200 } },
+  { route: '/api/app/me/list-columns', method: 'GET', path: () => '/api/app/me/list-columns', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
+  {
+    route: '/api/app/me/list-columns',
+    method: 'PUT',
+    path: () => '/api/app/me/list-columns',
+    // Every column, which is also what each person sees before choosing: changes nothing anyone sees.
+    json: {
+      columns: ['reference', 'name', 'place', 'finish', 'area', 'range', 'stage', 'assignee', 'received', 'waiting', 'followUp', 'score'],
+    },
+    expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
+  },
   { route: '/api/app/team', method: 'GET', path: () => '/api/app/team', expect: { signedOut: 401, sales: 403, other: 200, owner: 200 } },
   {
     route: '/api/app/team/invites',

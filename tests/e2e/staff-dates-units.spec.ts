@@ -64,7 +64,8 @@ test('the list and the inquiry page agree on the day in the firm’s zone, and l
   await expect(row.getByTestId('lead-received')).toHaveAttribute('datetime', '2030-12-01T19:19:00-06:00');
 
   await row.getByRole('link', { name: 'Dana Evening' }).click();
-  await expect(page).toHaveURL(new RegExp(`/app/leads/${leadId}$`));
+  // The list's link carries the view it came from (`?in=`), for Previous and Next.
+  await expect(page).toHaveURL(new RegExp(`/app/leads/${leadId}(\\?in=|$)`));
   await expect(page.getByTestId('lead-received')).toHaveText('Dec 1, 2030, 7:19 PM');
   await expect(page.getByTestId('lead-received')).toHaveAttribute('datetime', '2030-12-01T19:19:00-06:00');
 

@@ -25,6 +25,7 @@ const SAME_FIRM: Record<string, Record<StaffRole, boolean>> = {
   canAssignLead: { owner: true, sales: true },
   canEnterLead: { owner: true, sales: true },
   canDeleteLead: { owner: true, sales: false },
+  canExportLeads: { owner: true, sales: false },
   canSeeRates: { owner: true, sales: false },
   canEditRates: { owner: true, sales: false },
   canPublishRates: { owner: true, sales: false },

@@ -8,6 +8,7 @@ import { MailTemplate } from '../leads/mail-template.entity';
 import { LostReasonList } from '../leads/lost-reason-list.entity';
 import { FollowUpReminder } from '../leads/follow-up-reminder.entity';
 import { InquiryDigest } from '../leads/inquiry-digest.entity';
+import { ListColumnChoice } from '../leads/list-column-choice.entity';
 import { LeadPhoto } from '../photos/lead-photo.entity';
 import { RateBookVersion } from '../rates/rate-book-version.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
@@ -30,6 +31,7 @@ export const entities = [
   MailTemplate,
   LostReasonList,
   FollowUpReminder,
+  ListColumnChoice,
   LeadPhoto,
   FunnelEvent,
   Session,

@@ -46,4 +46,11 @@ export class Company extends BaseEntity {
   /** The firm's own website, shown in e-mails. */
   @Property({ type: 'string', length: 200, nullable: true })
   website: string | null = null;
+
+  /**
+   * How soon a new inquiry should get its first contact, in working minutes (Monday–Friday,
+   * 08:00–17:00 in the firm's zone); later than that it is overdue. Default: four working hours.
+   */
+  @Property({ type: 'smallint' })
+  responseTargetMinutes: number & Opt = 240;
 }

@@ -1,10 +1,12 @@
-import { Entity, Index, ManyToOne, Property, Unique, type Opt } from '@mikro-orm/core';
+import { BeforeCreate, BeforeUpdate, Entity, Index, ManyToOne, Property, Unique, wrap, type Opt } from '@mikro-orm/core';
 import { TenantEntity } from '../companies/tenant.entity';
 import type { Estimate, ProjectInput } from '~/lib/estimate';
 import type { Envelope } from '../db/versioned-json';
 import type { RateBookVersion } from '../rates/rate-book-version.entity';
 import type { Membership } from '../users/membership.entity';
 import type { ContactMethod, LeadSource, LeadStage } from '~/lib/shared/labels';
+import { finishFacts, searchTextOf } from './list-search';
+import { responseDueAt } from './response-due';
 
 /** A homeowner's inquiry: their inputs, the estimate they saw, how to reach them, where it stands. */
 @Entity({ tableName: 'lead' })
@@ -12,6 +14,24 @@ import type { ContactMethod, LeadSource, LeadStage } from '~/lib/shared/labels';
 @Index({ properties: ['company', 'createdAt'] })
 @Index({ properties: ['company', 'email'] })
 @Index({ properties: ['company', 'phone'] })
+// The Inquiries list (inquiry-list.ts): keyset pages per firm in the orders people sort by most,
+// and the trigram index its search uses. Deleted leads are never listed, so they are left out.
+@Index({
+  name: 'lead_list_received_index',
+  expression: `create index "lead_list_received_index" on "lead" ("company_id", "created_at", "id") where "deleted_at" is null`,
+})
+@Index({
+  name: 'lead_list_waiting_index',
+  expression: `create index "lead_list_waiting_index" on "lead" ("company_id", coalesce("last_contact_at", "created_at"), "id") where "deleted_at" is null`,
+})
+@Index({
+  name: 'lead_list_score_index',
+  expression: `create index "lead_list_score_index" on "lead" ("company_id", "triage_score", "id") where "deleted_at" is null`,
+})
+@Index({
+  name: 'lead_search_text_trgm_index',
+  expression: `create index "lead_search_text_trgm_index" on "lead" using gin ("search_text" gin_trgm_ops) where "deleted_at" is null`,
+})
 export class Lead extends TenantEntity {
   /** Short code the homeowner and staff can read out on the phone (e.g. `K7MX-42QD`). */
   @Property({ type: 'string', length: 12 })
@@ -134,4 +154,49 @@ export class Lead extends TenantEntity {
   /** Set when this inquiry was merged into another: its history moved there, and this row is kept as a pointer. */
   @ManyToOne({ entity: 'Lead', deleteRule: 'cascade', nullable: true })
   mergedInto: Lead | null = null;
+  // What the Inquiries list shows and filters by, kept beside the lead so the list never reads the
+  // estimate: set when the lead is stored (the hooks below), backfilled by the migration that added them.
+
+  /** Lowercase name, e-mail, reference, street, postcode and phone digits (list-search.ts). */
+  @Property({ type: 'text' })
+  searchText: string & Opt = '';
+
+  /** The finishes as the firm names them, e.g. "Beadboard wainscot, Shiplap". */
+  @Property({ type: 'string', length: 200 })
+  finishLabel: string & Opt = '';
+
+  /** The estimating core's treatment kinds in the estimate (shiplap, beadboard, …). */
+  @Property({ type: 'text[]', defaultRaw: `'{}'` })
+  finishKinds: string[] & Opt = [];
+
+  /** Net covered wall area of the estimate, square feet, rounded. */
+  @Property({ type: 'integer' })
+  coveredSqFt: number & Opt = 0;
+
+  /** Photos that came with it. */
+  @Property({ type: 'smallint' })
+  photoCount: number & Opt = 0;
+
+  @BeforeCreate()
+  protected fillListFacts(): void {
+    this.searchText = searchTextOf(this);
+    const estimate = this.estimate?.data;
+    if (estimate) {
+      const finish = finishFacts(estimate.takeoff.rooms);
+      this.finishLabel = finish.label;
+      this.finishKinds = finish.kinds;
+      this.coveredSqFt = Math.round(estimate.takeoff.netSqFt);
+      this.photoCount = estimate.takeoff.facts.photoCount;
+    }
+    // The firm's target in its own working hours; a firm given only by id (tests) sets it itself.
+    if (!this.responseDueAt && this.company && wrap(this.company).isInitialized()) {
+      this.responseDueAt = responseDueAt(this.createdAt, this.company.timeZone, this.company.responseTargetMinutes);
+    }
+  }
+
+  /** Contact details may be corrected later; the search follows them. */
+  @BeforeUpdate()
+  protected refreshSearchText(): void {
+    this.searchText = searchTextOf(this);
+  }
 }

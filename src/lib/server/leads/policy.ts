@@ -14,3 +14,5 @@ export const canAssignLead = (viewer: Viewer, lead: FirmScoped): boolean => role
 export const canEnterLead = (viewer: Viewer, target?: FirmScoped): boolean => roleInFirm(viewer, ['owner', 'sales'], target);
 /** Delete one (soft) and restore it within the restore window. */
 export const canDeleteLead = (viewer: Viewer, lead: FirmScoped): boolean => roleInFirm(viewer, ['owner'], lead);
+/** The firm's inquiries as a file (names, phones, e-mails of every homeowner): the owner's call. */
+export const canExportLeads = (viewer: Viewer, target?: FirmScoped): boolean => roleInFirm(viewer, ['owner'], target);
