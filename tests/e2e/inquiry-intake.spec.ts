@@ -47,7 +47,7 @@ test('a salesperson takes an inquiry on the phone with the widget’s room form 
   await expect(page.getByTestId('lead-range')).toHaveText(/^\$[\d,]+ – \$[\d,]+$/);
   // The live range priced the unanswered 1978 question as "not sure", the answer given: the same range.
   await expect(page.getByTestId('lead-range')).toHaveText(liveRange);
-  await expect(page.getByText('Entered by staff')).toBeVisible();
+  await expect(page.getByTestId('inquiry-header').getByText('Entered by staff')).toBeVisible();
   await expect(page.getByTestId('triage-score')).toHaveText(/^\d{1,3}$/);
   await expect(page.getByTestId('triage-reason')).toHaveCount(6);
   // A salesperson may not delete.
