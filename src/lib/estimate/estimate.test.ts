@@ -337,6 +337,11 @@ describe('properties of the price', () => {
   // those fixes: 10,000 clean with the default wainscot height, one counterexample left: a picture-frame
   // wainscot whose band rose past a window's sill re-divided its frames around the window and lost one
   // (ceiling 114 → 116 in, sill at 34 in); frames are now laid under each sill (picture-frame.test.ts).
+  // Stair walls: battens re-spread over a stair (67 → 68 in), balanced panels on a stair wall and
+  // courses beyond a door on the landing measured along the rake are fixed (stair-takeoff.test.ts,
+  // balanced-run.test.ts). Left: with a stair from the right end and doors on the landing, backing
+  // sheets set out from the foot slide past the doors as the wall grows (full-height flat panel,
+  // 408 → 409 in, one sheet fewer), found after 1,662 random runs.
   // CI stays on a fixed seed.
   const moreWallSeed = process.env.MORE_WALL_SEED === 'random' ? undefined : Number(process.env.MORE_WALL_SEED ?? 20261202);
   fcTest.prop([grown], { numRuns: Number(process.env.MORE_WALL_RUNS ?? 120), ...(moreWallSeed === undefined ? {} : { seed: moreWallSeed }) })(
