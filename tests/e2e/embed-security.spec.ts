@@ -4,7 +4,7 @@ import { expect, test } from '@playwright/test';
 import { issueFormToken } from '../../src/lib/server/embed/form-token';
 import { query } from '../helpers/app-database';
 import { freeLoopbackPort } from '../helpers/ports';
-import { formTokenFor, twoRoomProject } from './helpers/embed';
+import { asANewVisitor, formTokenFor, twoRoomProject } from './helpers/embed';
 
 const FOREIGN = 'https://not-the-firm.test';
 
@@ -151,6 +151,7 @@ test('the same idempotency key sent twice over HTTP makes one lead', async ({ re
       consent: true,
     },
   };
+  await asANewVisitor();
   const [first, second] = await Promise.all([request.post('/api/embed/cedar-hollow/leads', { data }), request.post('/api/embed/cedar-hollow/leads', { data })]);
   expect(first.status()).toBe(201);
   expect(second.status()).toBe(201);

@@ -1,4 +1,5 @@
 import { expect, type APIRequestContext, type FrameLocator, type Page } from '@playwright/test';
+import { query } from '../../helpers/app-database';
 import { MIN_SECONDS_TO_SUBMIT } from '../../../src/lib/server/embed/human-pace.ts';
 
 /** Opens the embed page as a browser would and returns the signed form token it hands the widget. */
@@ -57,4 +58,15 @@ export async function waitUntilAPersonCouldSend(page: Page): Promise<void> {
   if (opened === undefined) throw new Error('Call noteWidgetOpened(page) before opening the widget.');
   const left = opened + MIN_SECONDS_TO_SUBMIT * 1000 + 250 - Date.now();
   if (left > 0) await page.waitForTimeout(left);
+  await asANewVisitor();
+}
+
+/**
+ * Every browser test reaches the app from 127.0.0.1, so all of them share one address's allowance
+ * of inquiries (10 in 10 minutes, `api/embed/[slug]/leads.ts`); each test that sends is a visitor
+ * of its own, so its address starts afresh. The limit itself is tested in embed-security.spec.ts
+ * on the estimate route, which this leaves alone.
+ */
+export async function asANewVisitor(): Promise<void> {
+  await query(`delete from rate_limit where key like 'embed-leads:address:%'`);
 }
