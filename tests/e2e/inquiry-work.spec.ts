@@ -9,9 +9,10 @@ import { DEMO_PASSWORD } from './helpers/staff';
  * A salesperson works an inquiry that just came in through the widget: opens it from Inquiries,
  * looks at the photo full size, logs a call, asks a teammate to help with an @mention (who gets an
  * e-mail), and e-mails the homeowner from a template (which arrives with a link that opens the
- * estimate). Every step lands on the inquiry's timeline, in order.
+ * estimate), moves it to Spoken to, and finds it again by the phone typed with spaces. Every
+ * step lands on the inquiry's timeline, in order.
  */
-test('a salesperson works a new inquiry: photo, call, note with a mention, e-mail from a template', async ({ page, browser }) => {
+test('a salesperson works a new inquiry: photo, call, note with a mention, e-mail from a template, Spoken to, found by phone', async ({ page, browser }) => {
   test.setTimeout(120_000);
   const suffix = Date.now().toString(36);
   const name = `Ines Pellworth ${suffix}`;
@@ -52,7 +53,17 @@ test('a salesperson works a new inquiry: photo, call, note with a mention, e-mai
   await staff.getByLabel('Password').fill(DEMO_PASSWORD);
   await staff.getByRole('button', { name: 'Sign in' }).click();
   await expect(staff).toHaveURL(/\/app$/);
-  await staff.getByRole('link', { name }).first().click();
+  await expect(staff.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
+  // At the top of New inquiry, newest first, marked unread until someone opens it.
+  await staff.getByRole('button', { name: /^New inquiry/ }).click();
+  await expect(staff).toHaveURL(/stage=new/);
+  // (The other browser worker may send one inquiry meanwhile, so ours is first or second.)
+  const rows = staff.getByTestId('inquiry-row');
+  const top = rows.filter({ hasText: name });
+  await expect(top).toContainText('Unread');
+  const names = await rows.evaluateAll((found) => found.slice(0, 2).map((row) => row.textContent ?? ''));
+  expect(names.some((text) => text.includes(name))).toBe(true);
+  await top.getByRole('link', { name }).first().click();
   await expect(staff.getByRole('heading', { level: 1 })).toContainText(name);
   await expect(staff.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
 
@@ -118,11 +129,27 @@ test('a salesperson works a new inquiry: photo, call, note with a mention, e-mai
   await expect(page.getByRole('heading', { name: 'Your price estimate from Cedar Hollow Trim Co.' })).toBeVisible();
   await expect(page.getByTestId('result-range')).toHaveText(/^\$[\d,]+ – \$[\d,]+$/);
 
-  // Each step is on the timeline, in order (the timeline view shows these rows).
+  // Spoken to: the stage moves, and the history on the page shows every step in order.
+  await staff.reload();
+  await expect(staff.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
+  await staff.getByLabel('Stage', { exact: true }).selectOption({ label: 'Spoken to' });
+  const history = staff.getByTestId('timeline-entry');
+  await expect(history.last()).toContainText('New inquiry → Spoken to');
+  const kinds = ['received', 'opened', 'call', 'note', 'email-sent', 'viewed-by-homeowner', 'stage-moved'];
+  await expect(history).toHaveCount(kinds.length);
+  for (const [i, kind] of kinds.entries()) await expect(history.nth(i)).toHaveAttribute('data-kind', kind);
   const events = await query<{ kind: string }>(
     `select e.kind from lead_event e join lead l on l.id = e.lead_id where l.reference = $1 order by e.at, e.created_at`,
     [reference],
   );
-  expect(events.map((e) => e.kind)).toEqual(['received', 'opened', 'call', 'note', 'email-sent', 'viewed-by-homeowner']);
+  expect(events.map((e) => e.kind)).toEqual(kinds);
+
+  // Back on Inquiries, the homeowner's phone typed with spaces finds it, no longer unread.
+  await staff.goto('/app');
+  await expect(staff.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
+  await staff.getByLabel(/^Search/).fill('512 555 0163');
+  const found = staff.getByTestId('inquiry-row').filter({ hasText: name });
+  await expect(found).toHaveCount(1);
+  await expect(found).not.toContainText('Unread');
   await staff.close();
 });
