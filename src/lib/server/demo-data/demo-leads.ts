@@ -7,6 +7,9 @@ import type { Company } from '../companies/company.entity';
 import { estimateSnapshot } from '../estimates/estimate-snapshot';
 import { recordLeadEvent } from '../leads/lead-events';
 import { Lead } from '../leads/lead.entity';
+import { refreshTriageScore } from '../leads/triage';
+import { Membership } from '../users/membership.entity';
+import { DEFAULT_LOST_REASONS } from '~/lib/shared/lead-flow-schemas';
 import { leadInputs } from '../leads/lead-inputs';
 import { newLeadReference } from '../leads/lead-reference';
 import type { LeadStage } from '~/lib/shared/labels';
@@ -87,6 +90,10 @@ function generator(seed: number) {
 
 export async function seedDemoLeads(em: EntityManager, company: Company, version: RateBookVersion, rateBook: RateBook, postcodes: string[]): Promise<number> {
   if ((await em.count(Lead, { company })) > 0) return 0;
+  // Who worked the demo inquiries past the first stage: the firm's first salesperson, else its owner.
+  const team = await em.find(Membership, { company }, { populate: ['user'], orderBy: { role: 'desc', createdAt: 'asc' } });
+  const worker = team[0] ?? null;
+  const stored: Lead[] = [];
   const random = generator(company.slug.length * 7919);
   const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)]!;
   const treatments = rateBook.catalogue.treatments.filter((t) => t.enabled).map((t) => t.id);
@@ -153,8 +160,37 @@ export async function seedDemoLeads(em: EntityManager, company: Company, version
         updatedAt: createdAt,
       });
       recordLeadEvent(em, lead, 'received', { at: createdAt, data: { source: 'widget' } });
+      if (stage !== 'new' && worker) workedHistory(em, lead, worker, index);
+      stored.push(lead);
     }
   }
   await em.flush();
+  // Scored as any stored inquiry is, so the list's score column and its sort mean something.
+  for (const lead of stored) await refreshTriageScore(em, lead);
+  await em.flush();
   return index;
+}
+
+/**
+ * An inquiry past New inquiry was opened, called within a few hours and moved to its stage by the
+ * firm's salesperson, so the demo list shows worked inquiries rather than every one overdue. No
+ * random draws here: the rest of the demo stays as it was.
+ */
+function workedHistory(em: EntityManager, lead: Lead, worker: Membership, index: number): void {
+  const hour = 3_600_000;
+  const latest = Date.now() - 60_000;
+  const at = (hours: number) => new Date(Math.min(lead.createdAt.getTime() + hours * hour, latest));
+  const opened = at(0.5);
+  const called = at(1 + (index % 3));
+  const moved = at(2 + (index % 3));
+  const actorUserId = worker.user.id;
+  lead.openedAt = opened;
+  lead.firstContactAt = called;
+  lead.lastContactAt = called;
+  if (lead.stage === 'not-going-ahead') lead.lostReason = DEFAULT_LOST_REASONS[index % DEFAULT_LOST_REASONS.length]!;
+  recordLeadEvent(em, lead, 'opened', { actorUserId, at: opened });
+  recordLeadEvent(em, lead, 'call', { actorUserId, at: called, data: { outcome: 'reached' } });
+  const data: Record<string, unknown> = { from: 'new', to: lead.stage };
+  if (lead.lostReason) data.reason = lead.lostReason;
+  recordLeadEvent(em, lead, 'stage-moved', { actorUserId, at: moved, data });
 }
