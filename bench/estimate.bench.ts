@@ -123,6 +123,15 @@ const builtRateBook = built.parseRateBook(rateBookInput);
 
 // End to end from raw JSON, as the API receives it (rate book parsed each time too).
 const endToEnd = measureBatches(() => built.estimate(project, rateBookInput), 1000, 16, 250);
+// The same with nothing kept from earlier estimates (sheet layouts and cut lists counted afresh).
+const endToEndCold = measure(
+  () => {
+    built.clearEstimateMemos();
+    built.estimate(project, rateBookInput);
+  },
+  50,
+  500,
+);
 // With the rate book already parsed (as a server that caches the published version would).
 const parsedBook = measure(() => built.estimateParsed(built.projectSchema.parse(project), builtRateBook), 300, 3000);
 // The same end to end, on the sources as tsx loads them.
@@ -194,6 +203,7 @@ const jsonAndParse = measure(() => parseRateBook(JSON.parse(rateBookJson)), 200,
 const e = estimate(project, rateBookInput);
 const figures = {
   estimateQuietMedianMs: round(endToEnd.quietMedianMs),
+  estimateColdMedianMs: round(endToEndCold.medianMs),
   estimateMedianMs: round(endToEnd.medianMs),
   estimateP95Ms: round(endToEnd.p95Ms),
   estimateParsedRateBookMedianMs: round(parsedBook.medianMs),
@@ -227,6 +237,7 @@ console.log('Estimating core benchmark');
 console.log(
   `  six-room estimate, end to end:     median ${figures.estimateQuietMedianMs} ms in the quietest batch; over all ${figures.estimateMedianMs} ms, p95 ${figures.estimateP95Ms} ms (core bundled as it ships)`,
 );
+console.log(`  same, nothing kept from earlier:   median ${figures.estimateColdMedianMs} ms (memos of sheet layouts and cut lists cleared each time)`);
 console.log(`  same, rate book already parsed:    median ${figures.estimateParsedRateBookMedianMs} ms, p95 ${figures.estimateParsedRateBookP95Ms} ms`);
 console.log(`  same, sources loaded by tsx:       median ${figures.estimateUnderTsxMedianMs} ms`);
 console.log(`  sheet layout search (cold):        median ${figures.sheetLayoutColdMedianMsPerLayout} ms per layout`);

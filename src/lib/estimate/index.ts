@@ -11,6 +11,7 @@ export type { Rect, SheetLayoutOptions } from './sheet-layout.ts';
 export { boardRun, boardPositions } from './board-run.ts';
 export type { BoardRunResult } from './board-run.ts';
 export { stockPiecesNeeded, planStockCuts, EXACT_LIMIT } from './stock-cutting.ts';
+export { clearEstimateMemos } from './memos.ts';
 export { gallonsFor, gallonsToBuy, theoreticalCoverage, caulkFeetPerTube, filletFeetPerTube, beadFeetPerTube } from './coverage.ts';
 export { formatMoney } from './money.ts';
 export { EstimateInputError } from './errors.ts';

@@ -279,8 +279,15 @@ function fewestByStates(sizes: number[], cap: number, maxStates: number, maxStep
  */
 function forEachMaximalFill(len: number[], left: number[], first: number, cap: number, go: () => boolean, visit: (offcut: number) => void): void {
   const take = new Array<number>(len.length).fill(0);
-  const choose = (i: number, room: number): void => {
+  // rest[i]: the total length of the cuts still to cut in groups i on, the most they can take out
+  // of the offcut. A group passed over with cuts left must not fit the final offcut, so a branch
+  // whose offcut stays at least that long even if every later cut goes in holds no maximal fill
+  // and is not walked (the fills visited are the same, found with fewer steps).
+  const rest = new Array<number>(len.length + 1).fill(0);
+  for (let g = len.length - 1; g >= 0; g--) rest[g] = rest[g + 1]! + len[g]! * left[g]!;
+  const choose = (i: number, room: number, shortestPassed: number): void => {
     if (!go()) return;
+    if (room - rest[i]! >= shortestPassed - EPS) return;
     if (i === len.length) {
       for (let g = 0; g < len.length; g++) if (left[g]! - take[g]! > 0 && len[g]! <= room + EPS) return;
       for (let g = 0; g < len.length; g++) left[g] = left[g]! - take[g]!;
@@ -291,11 +298,11 @@ function forEachMaximalFill(len: number[], left: number[], first: number, cap: n
     const most = Math.min(left[i]!, Math.floor(room / len[i]! + EPS));
     for (let t = most; t >= 0; t--) {
       take[i] = t;
-      choose(i + 1, room - t * len[i]!);
+      choose(i + 1, room - t * len[i]!, left[i]! > t ? Math.min(shortestPassed, len[i]!) : shortestPassed);
     }
     take[i] = 0;
   };
-  choose(first, cap - len[first]!);
+  choose(first, cap - len[first]!, Infinity);
 }
 
 /** Best single pattern for the sequential heuristic: the subset of remaining cuts that fills one stock most. */
@@ -384,6 +391,30 @@ export function stockPiecesNeeded(cuts: number[], stockLength: number, kerf = 0)
 export function stockPiecesSolved(cuts: number[], stockLength: number, kerf = 0): { count: number; exact: boolean } {
   check(cuts, stockLength, kerf);
   if (cuts.length === 0) return { count: 0, exact: true };
+  // The same list comes back often (a homeowner changing one room re-prices the others; a wall's
+  // trim is counted for the price and again for the order list), and the answer depends on the list
+  // alone, so it is kept, as sheet layouts are.
+  if (cuts.length > MAX_MEMO_CUTS) return solveStockPieces(cuts, stockLength, kerf);
+  const key = `${stockLength}|${kerf}|${cuts.join(',')}`;
+  const known = solvedMemo.get(key);
+  if (known) return { ...known };
+  const solved = solveStockPieces(cuts, stockLength, kerf);
+  if (solvedMemo.size >= MAX_SOLVED_MEMO) solvedMemo.clear();
+  solvedMemo.set(key, solved);
+  return { ...solved };
+}
+
+const solvedMemo = new Map<string, { count: number; exact: boolean }>();
+// At most about 2,000 lists of up to 1,000 cuts: a few megabytes.
+const MAX_SOLVED_MEMO = 2_000;
+const MAX_MEMO_CUTS = 1_000;
+
+/** Empties the memo of counted lists (for benchmarks that want cold timings). */
+export function clearStockCuttingMemo(): void {
+  solvedMemo.clear();
+}
+
+function solveStockPieces(cuts: number[], stockLength: number, kerf: number): { count: number; exact: boolean } {
   const sizes = cuts.map((c) => c + kerf);
   const cap = stockLength + kerf;
   if (cuts.length <= EXACT_LIMIT) {
