@@ -98,6 +98,11 @@ test('on a phone the list is cards with a one-tap call', async ({ page }) => {
   const card = page.getByTestId('inquiry-card');
   await expect(card).toHaveCount(1);
   await expect(card.getByRole('link', { name: 'Call Ottoline Brackwater' })).toHaveAttribute('href', 'tel:+15125559877');
+  // The filters fold away behind one button, so the first cards are in view.
+  await expect(card).toBeInViewport();
+  await expect(page.getByRole('combobox', { name: /^Assigned to/ })).toBeHidden();
+  await page.getByRole('button', { name: 'Filters' }).click();
+  await expect(page.getByRole('combobox', { name: /^Assigned to/ })).toBeVisible();
 });
 
 test('a new inquiry appears without a reload, marked unread until opened', async ({ page }) => {

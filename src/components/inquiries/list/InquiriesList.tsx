@@ -58,6 +58,8 @@ export default function InquiriesList({ initialView, initialPage, initialColumns
   // Cursor of each page seen so far in this view: page i is fetched after cursors[i].
   const [cursors, setCursors] = useState<(string | null)[]>([null]);
   const [pageIndex, setPageIndex] = useState(0);
+  // On a phone the filters fold away behind one button, so the first inquiries are in view.
+  const [filtersOpen, setFiltersOpen] = useState(false);
   const [highlight, setHighlight] = useState(0);
   const [nowMs, setNowMs] = useState(() => Date.parse(nowIso));
   const [columns, setColumns] = useState<InquiryColumn[]>(initialColumns);
@@ -305,7 +307,17 @@ export default function InquiriesList({ initialView, initialPage, initialColumns
         })}
       </div>
 
-      <fieldset className="mt-3 flex flex-wrap items-end gap-3 text-sm">
+      <button
+        type="button"
+        className="mt-3 rounded border border-slate/40 bg-white px-3 py-1 text-sm sm:hidden"
+        aria-expanded={filtersOpen}
+        aria-controls="inquiry-filters"
+        onClick={() => setFiltersOpen((open) => !open)}
+      >
+        {filtersOpen ? 'Hide filters' : 'Filters'}
+        {activeFilterCount(view) > 0 && ` (${activeFilterCount(view)} on)`}
+      </button>
+      <fieldset id="inquiry-filters" className={`mt-3 ${filtersOpen ? 'flex' : 'hidden'} flex-wrap items-end gap-3 text-sm sm:flex`}>
         <legend className="sr-only">Filters</legend>
         <label>
           <span className="block">Assigned to</span>
@@ -496,4 +508,9 @@ export default function InquiriesList({ initialView, initialPage, initialColumns
       </nav>
     </div>
   );
+}
+
+/** How many of the filters under the Filters button narrow the view (stage and search are outside it). */
+function activeFilterCount(view: View): number {
+  return (['assignee', 'finish', 'price', 'from', 'to', 'photos', 'visit', 'overdue', 'unread'] as const).filter((name) => Boolean(view[name])).length;
 }
