@@ -5,13 +5,14 @@
 import { useId, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { BODY_MAX, mailTemplateSchema, SUBJECT_MAX, type MailTemplateView } from '~/lib/shared/inquiry-work-schemas';
-import { sendJson, RequestFailed } from '../inquiries/page/api';
+import { sendJson, asRequestFailed, type FormStatus } from '../inquiries/page/api';
+import { StatusLine } from '../inquiries/page/StatusLine';
 
 type Draft = { name: string; subject: string; body: string };
 const EMPTY: Draft = { name: '', subject: '', body: '' };
 
 function fieldErrors(error: unknown): { message: string; fields: Record<string, string> } {
-  const problem = error instanceof RequestFailed ? error : new RequestFailed(String(error), 0);
+  const problem = asRequestFailed(error);
   return { message: problem.message, fields: problem.fields };
 }
 
@@ -29,7 +30,7 @@ function TemplateForm({
   const id = useId();
   const [draft, setDraft] = useState(initial);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [status, setStatus] = useState<{ kind: 'done' | 'failed'; text: string } | null>(null);
+  const [status, setStatus] = useState<FormStatus>(null);
   const [busy, setBusy] = useState(false);
 
   async function run(action: () => Promise<void>, done: string) {
@@ -98,9 +99,7 @@ function TemplateForm({
             Remove
           </button>
         )}
-        <p role="status" className={status?.kind === 'failed' ? 'text-sm text-brick' : 'text-sm text-lapwing'}>
-          {status?.text}
-        </p>
+        <StatusLine status={status} />
       </div>
     </form>
   );

@@ -2,14 +2,15 @@
 import { useId, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { CALL_OUTCOMES, CALL_OUTCOME_LABELS, CALL_NOTE_MAX, callSchema, type CallOutcome } from '~/lib/shared/inquiry-work-schemas';
-import { announceLeadChanged, sendJson, RequestFailed } from './api';
+import { announceLeadChanged, sendJson, asRequestFailed, type FormStatus } from './api';
+import { StatusLine } from './StatusLine';
 
 export function CallLog({ leadId }: { leadId: string }) {
   const id = useId();
   const [outcome, setOutcome] = useState<CallOutcome | null>(null);
   const [note, setNote] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [status, setStatus] = useState<{ kind: 'done' | 'failed'; text: string } | null>(null);
+  const [status, setStatus] = useState<FormStatus>(null);
   const [busy, setBusy] = useState(false);
 
   async function submit(event: React.SyntheticEvent<HTMLFormElement>) {
@@ -29,7 +30,7 @@ export function CallLog({ leadId }: { leadId: string }) {
       setNote('');
       announceLeadChanged(leadId);
     } catch (error) {
-      const failure = error instanceof RequestFailed ? error : new RequestFailed(String(error), 0);
+      const failure = asRequestFailed(error);
       setErrors(failure.fields);
       setStatus({ kind: 'failed', text: failure.message });
     } finally {
@@ -85,9 +86,7 @@ export function CallLog({ leadId }: { leadId: string }) {
         <button type="submit" className="button-primary" disabled={busy}>
           Log call
         </button>
-        <p role="status" className={status?.kind === 'failed' ? 'text-sm text-brick' : 'text-sm text-lapwing'}>
-          {status?.text}
-        </p>
+        <StatusLine status={status} />
       </div>
     </form>
   );

@@ -8,7 +8,8 @@ import { useId, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { fillPlaceholders, type PlaceholderValues } from '~/lib/shared/mail-placeholders';
 import { BODY_MAX, leadEmailSchema, SUBJECT_MAX, type MailTemplateView } from '~/lib/shared/inquiry-work-schemas';
-import { announceLeadChanged, sendJson, RequestFailed } from './api';
+import { announceLeadChanged, sendJson, asRequestFailed, type FormStatus } from './api';
+import { StatusLine } from './StatusLine';
 
 type Props = {
   leadId: string;
@@ -26,7 +27,7 @@ export function EmailComposer({ leadId, to, templates, values, templatesHref }: 
   const [subject, setSubject] = useState('');
   const [body, setBody] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [status, setStatus] = useState<{ kind: 'done' | 'failed'; text: string } | null>(null);
+  const [status, setStatus] = useState<FormStatus>(null);
   const [busy, setBusy] = useState(false);
 
   function choose(nextId: string) {
@@ -57,7 +58,7 @@ export function EmailComposer({ leadId, to, templates, values, templatesHref }: 
       setBody('');
       announceLeadChanged(leadId);
     } catch (failure) {
-      const problem = failure instanceof RequestFailed ? failure : new RequestFailed(String(failure), 0);
+      const problem = asRequestFailed(failure);
       setErrors(problem.fields);
       setStatus({ kind: 'failed', text: problem.message });
     } finally {
@@ -136,9 +137,7 @@ export function EmailComposer({ leadId, to, templates, values, templatesHref }: 
         <button type="submit" className="button-primary" disabled={busy}>
           Send e-mail
         </button>
-        <p role="status" className={status?.kind === 'failed' ? 'text-sm text-brick' : 'text-sm text-lapwing'}>
-          {status?.text}
-        </p>
+        <StatusLine status={status} />
       </div>
     </form>
   );

@@ -6,7 +6,8 @@ import { useId, useRef, useState } from 'react';
 import '~/lib/shared/zod-in-browser';
 import { mentionedIn, mentionQueryAt, type Mentionable } from '~/lib/shared/mentions';
 import { NOTE_MAX, noteSchema } from '~/lib/shared/inquiry-work-schemas';
-import { announceLeadChanged, sendJson, RequestFailed } from './api';
+import { announceLeadChanged, sendJson, asRequestFailed, type FormStatus } from './api';
+import { StatusLine } from './StatusLine';
 
 /** At most this many names in the list at once. common practice, no source. */
 const MAX_OFFERED = 6;
@@ -20,7 +21,7 @@ export function NoteEditor({ leadId, teammates }: { leadId: string; teammates: M
   const [active, setActive] = useState(0);
   const [dismissedAt, setDismissedAt] = useState<number | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const [status, setStatus] = useState<{ kind: 'done' | 'failed'; text: string } | null>(null);
+  const [status, setStatus] = useState<FormStatus>(null);
   const [busy, setBusy] = useState(false);
 
   const mention = mentionQueryAt(text, caret);
@@ -80,7 +81,7 @@ export function NoteEditor({ leadId, teammates }: { leadId: string; teammates: M
       setCaret(0);
       announceLeadChanged(leadId);
     } catch (failure) {
-      const problem = failure instanceof RequestFailed ? failure : new RequestFailed(String(failure), 0);
+      const problem = asRequestFailed(failure);
       setError(problem.fields.text ?? null);
       setStatus({ kind: 'failed', text: problem.message });
     } finally {
@@ -158,9 +159,7 @@ export function NoteEditor({ leadId, teammates }: { leadId: string; teammates: M
         <button type="submit" className="button-primary" disabled={busy}>
           Add note
         </button>
-        <p role="status" className={status?.kind === 'failed' ? 'text-sm text-brick' : 'text-sm text-lapwing'}>
-          {status?.text}
-        </p>
+        <StatusLine status={status} />
       </div>
     </form>
   );

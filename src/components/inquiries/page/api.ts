@@ -58,3 +58,11 @@ export async function act(leadId: string, method: 'POST' | 'PUT', url: string, b
 export function announceLeadChanged(leadId: string): void {
   void mutate(timelineUrl(leadId));
 }
+
+/** Any failure of a staff form's request, as the refusal it shows (a bug's message, status 0). */
+export function asRequestFailed(error: unknown): RequestFailed {
+  return error instanceof RequestFailed ? error : new RequestFailed(String(error), 0);
+}
+
+/** What a staff form says after its last send: done, or failed with the server's message. */
+export type FormStatus = { kind: 'done' | 'failed'; text: string } | null;
