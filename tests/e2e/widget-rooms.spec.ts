@@ -31,9 +31,9 @@ for (const width of [320, 375])
   }) => {
     test.setTimeout(90_000);
     await page.setViewportSize({ width, height: 740 });
-    noteWidgetOpened(page);
     await page.goto('/embed/cedar-hollow');
     await expect(page.locator('astro-island')).not.toHaveAttribute('ssr');
+    noteWidgetOpened(page);
     await bathroom(page, "5'");
     // A room named bathroom is proposed as damp.
     await expect(page.getByRole('checkbox', { name: /This room gets damp/ })).toBeChecked();

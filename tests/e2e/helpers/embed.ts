@@ -34,17 +34,20 @@ export const twoRoomProject = {
  */
 export async function openWidgetOnDemoSite(page: Page, size?: { width: number; height: number }): Promise<FrameLocator> {
   if (size) await page.setViewportSize(size);
-  noteWidgetOpened(page);
   await page.goto('/demo/cedar-hollow');
   const widget = page.frameLocator('iframe[title="Price your walls"]');
   await expect(widget.getByRole('heading', { name: 'Your rooms' })).toBeVisible({ timeout: 15_000 });
+  noteWidgetOpened(page);
   await expect(widget.locator('astro-island[ssr]')).toHaveCount(0, { timeout: 15_000 });
   return widget;
 }
 
 const openedAt = new WeakMap<Page, number>();
 
-/** Call just before the page that gets the widget's form token is opened. */
+/**
+ * Call once the widget shows: its form token was issued when its page was rendered, so waiting
+ * from here waits at least as long from the token (a cold server can take seconds to render it).
+ */
 export function noteWidgetOpened(page: Page): void {
   openedAt.set(page, Date.now());
 }
