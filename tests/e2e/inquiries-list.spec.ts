@@ -65,6 +65,7 @@ test('search by a phone typed with spaces, a stage filter kept in the address, a
   // Back to the whole list: "/" focuses the search, j and k move, Enter opens (not while typing).
   await page.goto('/app?sort=name');
   await hydrated(page);
+  await expect(page.locator('[data-keys-ready="true"]')).toHaveCount(1);
   await page.keyboard.press('/');
   await expect(page.getByLabel(/^Search/)).toBeFocused();
   await page.keyboard.press('j');

@@ -140,6 +140,11 @@ export default function InquiriesList({ initialView, initialPage, initialColumns
     return () => document.removeEventListener('keydown', onKey);
   }, [rows, highlight, linkOf]);
 
+  // React hydrates in a transition, so the island can look hydrated before this listener is on;
+  // the attribute says the keys work (tests wait for it rather than guessing).
+  const [keysReady, setKeysReady] = useState(false);
+  useEffect(() => setKeysReady(true), []);
+
   useEffect(() => {
     rowLinks.current[highlight]?.closest('tr')?.scrollIntoView?.({ block: 'nearest' });
   }, [highlight]);
@@ -249,7 +254,7 @@ export default function InquiriesList({ initialView, initialPage, initialColumns
   const exportHref = `/api/app/leads/export${viewQs ? `?${viewQs}` : ''}`;
 
   return (
-    <div>
+    <div data-keys-ready={keysReady ? 'true' : undefined}>
       <div className="flex flex-wrap items-end gap-3">
         <div className="min-w-[14rem] flex-1">
           <label htmlFor="inquiry-search" className="block text-sm font-medium">
