@@ -114,6 +114,11 @@ const boundaryZones = [
     message: 'The estimating core imports only itself, zod and node built-ins.',
   },
   {
+    target: 'src/lib/visits',
+    from: ['src/lib/server', 'src/lib/shared', 'src/lib/estimate', 'src/components', 'src/layouts', ...GLUE],
+    message: 'The visit-scheduling core imports only itself, date-fns, @date-fns/tz, ics and zod.',
+  },
+  {
     target: 'src/lib/shared',
     from: ['src/lib/server', 'src/components', 'src/layouts', ...GLUE],
     message: 'src/lib/shared is safe for islands and server: it imports only the estimating core and itself.',
@@ -200,6 +205,25 @@ export default defineConfig(
               // Paths inside the project (relative or ~/) are judged by the zones above.
               regex: '^(?!(?:zod(?:/.*)?|node:.+|\\.{1,2}/.*|~/.*)$)',
               message: 'The estimating core imports only itself, zod and node: built-ins (src/lib/estimate/).',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // The visit-scheduling core: pure, like the estimating core; zone arithmetic through date-fns.
+    files: ['src/lib/visits/**'],
+    ignores: TESTS,
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              // Paths inside the project (relative or ~/) are judged by the zones above.
+              regex: '^(?!(?:zod(?:/.*)?|date-fns(?:/.*)?|@date-fns/tz(?:/.*)?|ics|\\.{1,2}/.*|~/.*)$)',
+              message: 'The visit-scheduling core imports only itself, date-fns, @date-fns/tz, ics and zod (src/lib/visits/).',
             },
           ],
         },

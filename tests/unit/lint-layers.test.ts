@@ -50,6 +50,25 @@ describe('the estimating core', () => {
   });
 });
 
+describe('the visit-scheduling core', () => {
+  test('imports itself, date-fns, @date-fns/tz, ics and zod', async () => {
+    expect(await broken('src/lib/visits/zz-new.ts', './slots', '~/lib/visits/local-time', 'date-fns', '@date-fns/tz', 'ics', 'zod')).toEqual([]);
+  });
+  test('imports no framework, database, server, shared, estimate or component code', async () => {
+    expect(await broken('src/lib/visits/zz-new.ts', 'react')).toEqual(['no-restricted-imports']);
+    expect(await broken('src/lib/visits/zz-new.ts', '@mikro-orm/core')).toEqual(['no-restricted-imports']);
+    expect(await broken('src/lib/visits/zz-new.ts', 'node:fs')).toEqual(['no-restricted-imports']);
+    expect(await broken('src/lib/visits/zz-new.ts', '~/lib/server/clock')).toEqual(LAYER);
+    expect(await broken('src/lib/visits/zz-new.ts', '../shared/time')).toEqual(LAYER);
+    expect(await broken('src/lib/visits/zz-new.ts', '~/lib/estimate/index.ts')).toEqual(LAYER);
+    expect(await broken('src/lib/visits/zz-new.ts', '~/components/forms/LengthField')).toEqual(LAYER);
+  });
+  test('shared and server code may import it', async () => {
+    expect(await broken('src/lib/shared/zz-new.ts', '~/lib/visits/index.ts')).toEqual([]);
+    expect(await broken('src/lib/server/leads/zz-new.ts', '~/lib/visits/index.ts')).toEqual([]);
+  });
+});
+
 describe('shared schemas and labels', () => {
   test('import the core, themselves and zod', async () => {
     expect(await broken('src/lib/shared/zz-new.ts', '~/lib/estimate/index.ts', './labels', 'zod')).toEqual([]);

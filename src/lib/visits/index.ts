@@ -1,0 +1,2 @@
+/** Visits: the pure scheduling core (no framework, no database). */
+export { openSlots, SlotInputError, type OpenSlotsInput, type TimeRange } from './slots.ts';
