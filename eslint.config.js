@@ -18,7 +18,8 @@ import globals from 'globals';
 const FOUNDATION = ['config', 'clock', 'time', 'log', 'after-response', 'unavailable', 'errors', 'request-id', 'http', 'form-failure', 'viewer'];
 const BELOW_DOMAINS = [...FOUNDATION, 'db', 'rate-limit'];
 const DOMAINS_BELOW_AUTH = [...BELOW_DOMAINS, 'companies', 'jobs', 'users', 'mail', 'storage', 'rates'];
-const BELOW_PHOTOS = [...DOMAINS_BELOW_AUTH, 'auth', 'estimates', 'leads', 'team'];
+const BELOW_VISITS = [...DOMAINS_BELOW_AUTH, 'auth', 'estimates', 'leads', 'team'];
+const BELOW_PHOTOS = [...BELOW_VISITS, 'visits'];
 const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake'];
 
 /** @type {[unit: string, mayImport: string[]][]} */
@@ -51,6 +52,8 @@ const SERVER_LAYERS = [
   ['estimates', DOMAINS_BELOW_AUTH],
   ['leads', [...DOMAINS_BELOW_AUTH, 'auth', 'estimates']],
   ['team', [...DOMAINS_BELOW_AUTH, 'auth', 'estimates']],
+  // Site visits: availability, open slots, booking, invitations and reminders.
+  ['visits', BELOW_VISITS],
   ['photos', BELOW_PHOTOS],
   ['embed', [...BELOW_PHOTOS, 'photos']],
   // Inquiries coming in and kept tidy: staff-entered inquiries, merging, purging deleted ones, the morning digest.

@@ -11,7 +11,16 @@ import { DEFAULT_LOST_REASONS } from '../../src/lib/shared/lead-flow-schemas';
  * Add a row for every new file under src/pages/app or src/pages/api/app; the last test fails otherwise.
  */
 type Who = 'signedOut' | 'sales' | 'other' | 'owner';
-type Ids = { samMember: string; oliveMember: string; invite: string; lead: string; template: string; receivedEvent: string; phoneLead: string };
+type Ids = {
+  samMember: string;
+  oliveMember: string;
+  invite: string;
+  lead: string;
+  template: string;
+  receivedEvent: string;
+  phoneLead: string;
+  cancelledVisit: string;
+};
 type Row = {
   route: string;
   method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -246,6 +255,29 @@ const MATRIX: Row[] = [
     json: { newInquiryMail: true },
     expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
   },
+  // Visits. The booking body is refused (400) and the visit is already cancelled (409), so no
+  // caller books or moves anything; another firm's owner gets 404 before the body is read.
+  { route: '/api/app/visits/slots', method: 'GET', path: () => '/api/app/visits/slots', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
+  {
+    route: '/api/app/leads/[id]/visits',
+    method: 'POST',
+    path: (ids) => `/api/app/leads/${ids.lead}/visits`,
+    json: (ids: Ids) => ({ start: 'not a time', salespersonId: ids.samMember }),
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/visits/[id]/move',
+    method: 'POST',
+    path: (ids) => `/api/app/visits/${ids.cancelledVisit}/move`,
+    json: { start: '2031-01-06T15:00:00.000Z' },
+    expect: { signedOut: 401, sales: 409, other: 404, owner: 409 },
+  },
+  {
+    route: '/api/app/visits/[id]/cancel',
+    method: 'POST',
+    path: (ids) => `/api/app/visits/${ids.cancelledVisit}/cancel`,
+    expect: { signedOut: 401, sales: 409, other: 404, owner: 409 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.
@@ -291,6 +323,13 @@ test.beforeAll(async () => {
     },
   });
   expect(phone.status()).toBe(201);
+  // A visit already cancelled: moving or cancelling it is refused whoever asks.
+  const [cancelledVisit] = await query<{ id: string }>(
+    `insert into "visit" ("id", "company_id", "lead_id", "salesperson_id", "starts_at", "ends_at", "blocked_until", "status", "booked_via", "cancelled_at", "cancelled_by")
+     select gen_random_uuid(), l."company_id", l."id", null, '2031-01-06T15:00Z', '2031-01-06T16:00Z', '2031-01-06T16:30Z', 'cancelled', 'staff', now(), 'staff'
+     from "lead" l where l."id" = $1 returning "id"`,
+    [lead!.id],
+  );
   ids = {
     samMember: member('sam@cedar-hollow.test'),
     oliveMember: member('olive@cedar-hollow.test'),
@@ -299,6 +338,7 @@ test.beforeAll(async () => {
     template: (await template.json()).id,
     receivedEvent: received!.id,
     phoneLead: (await phone.json()).lead.id,
+    cancelledVisit: cancelledVisit!.id,
   };
 });
 

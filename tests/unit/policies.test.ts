@@ -5,6 +5,7 @@ import * as leadPolicies from '~/lib/server/leads/policy';
 import { leadActions } from '~/lib/server/leads/present-lead-actions';
 import * as ratePolicies from '~/lib/server/rates/policy';
 import * as teamPolicies from '~/lib/server/team/policy';
+import * as visitPolicies from '~/lib/server/visits/policy';
 import type { FirmScoped, Viewer } from '~/lib/server/viewer';
 
 const POLICIES: Record<string, (viewer: Viewer, target: FirmScoped) => boolean> = {
@@ -12,6 +13,7 @@ const POLICIES: Record<string, (viewer: Viewer, target: FirmScoped) => boolean> 
   ...leadPolicies,
   ...ratePolicies,
   ...teamPolicies,
+  ...visitPolicies,
 };
 
 // Source: the product's roles as people are told them when invited (ROLE_LABELS in
@@ -31,6 +33,11 @@ const SAME_FIRM: Record<string, Record<StaffRole, boolean>> = {
   canPublishRates: { owner: true, sales: false },
   canManageTeam: { owner: true, sales: false },
   canUseSetup: { owner: true, sales: false },
+  canSeeVisits: { owner: true, sales: true },
+  canManageVisit: { owner: true, sales: true },
+  canEditVisitSettings: { owner: true, sales: false },
+  // Someone else's hours (each person keeps their own: see the test below).
+  canEditAvailability: { owner: true, sales: false },
 };
 
 const FIRM_A = 'a0000000-0000-4000-8000-00000000000a';
@@ -65,6 +72,17 @@ describe('permission policies', () => {
 
   test('the table lists every policy the domains export, and nothing else', () => {
     expect(Object.keys(POLICIES).sort()).toEqual(Object.keys(SAME_FIRM).sort());
+  });
+});
+
+describe('weekly hours', () => {
+  test('a salesperson keeps their own hours, not a teammate’s; the owner keeps anyone’s', () => {
+    const me = viewer('sales');
+    const mine = { ...ownedBy(FIRM_A), user: { id: me.userId } };
+    const theirs = { ...ownedBy(FIRM_A), user: { id: 'd0000000-0000-4000-8000-00000000000d' } };
+    expect([visitPolicies.canEditAvailability(me, mine), visitPolicies.canEditAvailability(me, theirs)]).toEqual([true, false]);
+    expect(visitPolicies.canEditAvailability(viewer('owner'), theirs)).toBe(true);
+    expect(visitPolicies.canEditAvailability(viewer('sales', FIRM_B), { ...ownedBy(FIRM_A), user: { id: me.userId } })).toBe(false);
   });
 });
 

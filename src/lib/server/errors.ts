@@ -6,6 +6,9 @@ import { currentLog } from './log';
  * status and the public JSON shape `{"error": "...", "fields": {"path": "message"}}`.
  */
 export class AppError extends Error {
+  /** More of the answer beside `error` and `fields` (a 409's open alternatives, say). */
+  extra?: Record<string, unknown>;
+
   constructor(
     message: string,
     readonly status: number,
@@ -93,7 +96,7 @@ export function errorResponse(error: unknown, extraHeaders: Record<string, strin
     error = new ServiceUnavailable();
   }
   if (error instanceof AppError) {
-    const body: { error: string; fields?: Record<string, string> } = { error: error.message };
+    const body: Record<string, unknown> & { error: string; fields?: Record<string, string> } = { ...error.extra, error: error.message };
     if (error.fields && Object.keys(error.fields).length) body.fields = error.fields;
     return Response.json(body, { status: error.status, headers: { ...error.headers, ...extraHeaders } });
   }

@@ -18,6 +18,8 @@ import { Session } from '../auth/session.entity';
 import { PasswordReset } from '../auth/password-reset.entity';
 import { Invite } from '../team/invite.entity';
 import { RateLimitEntry } from '../db/rate-limit-entry.entity';
+import { Availability } from '../visits/availability.entity';
+import { Visit } from '../visits/visit.entity';
 
 export const entities = [
   Company,
@@ -39,4 +41,6 @@ export const entities = [
   Invite,
   RateLimitEntry,
   InquiryDigest,
+  Availability,
+  Visit,
 ];

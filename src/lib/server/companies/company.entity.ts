@@ -53,4 +53,30 @@ export class Company extends BaseEntity {
    */
   @Property({ type: 'smallint' })
   responseTargetMinutes: number & Opt = 240;
+
+  // Site visits (Setup → Visits). Product defaults, not trade figures: each firm sets its own.
+
+  /** How long a site visit takes, in minutes. */
+  @Property({ type: 'smallint' })
+  visitMinutes: number & Opt = 60;
+
+  /** Kept free after every visit for travel, in minutes (so also before the next one). */
+  @Property({ type: 'smallint' })
+  visitBufferMinutes: number & Opt = 30;
+
+  /** Offered start times step this far apart from the start of each range, in minutes. */
+  @Property({ type: 'smallint' })
+  visitStepMinutes: number & Opt = 30;
+
+  /** No visit may be booked to start sooner than this after booking, in minutes. */
+  @Property({ type: 'integer' })
+  visitMinNoticeMinutes: number & Opt = 1440;
+
+  /** How many days ahead homeowners may book. */
+  @Property({ type: 'smallint' })
+  visitHorizonDays: number & Opt = 28;
+
+  /** Whether the price widget offers homeowners a visit time after they send their inquiry. */
+  @Property({ type: 'boolean' })
+  onlineBooking: boolean & Opt = true;
 }

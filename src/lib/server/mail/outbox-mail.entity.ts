@@ -6,6 +6,9 @@ import type { Company } from '../companies/company.entity';
  * queued → sending (claimed by one delivery pass until `claimedUntil`) → sent, or back to queued
  * for a later attempt, or failed after the last attempt.
  */
+/** A calendar part: nodemailer sends it as text/calendar with this METHOD (RFC 5546), and as an attachment. */
+export type MailCalendar = { method: 'REQUEST' | 'CANCEL'; filename: string; content: string };
+
 export type OutboxStatus = 'queued' | 'sending' | 'sent' | 'failed';
 
 /**
@@ -38,6 +41,10 @@ export class OutboxMail extends BaseEntity {
   /** Optional Reply-To, so a homeowner's answer reaches the firm rather than the no-reply sender. */
   @Property({ type: 'string', length: 254, nullable: true })
   replyTo: string | null = null;
+
+  /** An RFC 5545 calendar file sent with the message (a visit's invitation or cancellation). */
+  @Property({ type: 'json', nullable: true })
+  calendar: MailCalendar | null = null;
 
   @Property({ type: 'string', length: 8 })
   status: OutboxStatus & Opt = 'queued';

@@ -3,7 +3,7 @@ import { LockMode, type FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { config } from '../config';
 import { Company } from '../companies/company.entity';
-import { OutboxMail } from './outbox-mail.entity';
+import { OutboxMail, type MailCalendar } from './outbox-mail.entity';
 import { sendOne, type SendMail } from './transport';
 
 export type MailMessage = {
@@ -15,6 +15,8 @@ export type MailMessage = {
   /** Sent in this name (the firm's), from our own address. */
   fromName?: string;
   companyId?: string;
+  /** A calendar file (a visit's invitation) to send with it. */
+  calendar?: MailCalendar;
 };
 
 /** After this many failed attempts a message is marked failed and no longer retried. */
@@ -39,6 +41,7 @@ export function enqueueMail(em: EntityManager, message: MailMessage): OutboxMail
     htmlBody: message.html ?? null,
     replyTo: message.replyTo ?? null,
     fromName: message.fromName ?? null,
+    calendar: message.calendar ?? null,
   });
 }
 
@@ -96,6 +99,7 @@ export async function deliverDueMail(
         replyTo: claim.replyTo ?? undefined,
         fromName: claim.fromName ?? undefined,
         messageId: claim.messageId!,
+        calendar: claim.calendar ?? undefined,
       };
       const outcome = await withTimeout(
         Promise.resolve().then(() => send(message)),

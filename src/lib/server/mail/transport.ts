@@ -11,6 +11,8 @@ export type OutgoingMail = {
   fromName?: string;
   /** The Message-ID header to send (kept by the outbox across attempts); nodemailer makes one otherwise. */
   messageId?: string;
+  /** A calendar file: sent as the message's text/calendar part (so mail programs offer to add it) and as an .ics attachment. */
+  calendar?: { method: 'REQUEST' | 'CANCEL'; filename: string; content: string };
 };
 export type SendMail = (message: OutgoingMail) => Promise<void>;
 
@@ -40,8 +42,9 @@ export function createSmtpSender(smtpUrl: string): SendMail {
     // The local stand-in offers no TLS; a real provider is reached with smtps:// or STARTTLS.
     ignoreTLS: url.protocol === 'smtp:' && url.hostname === '127.0.0.1',
   });
-  return async ({ fromName, ...message }) => {
-    await transporter.sendMail({ from: senderFor(config.mailFrom, fromName), ...message });
+  return async ({ fromName, calendar, ...message }) => {
+    const icalEvent = calendar ? { method: calendar.method, filename: calendar.filename, content: calendar.content } : undefined;
+    await transporter.sendMail({ from: senderFor(config.mailFrom, fromName), ...message, ...(icalEvent ? { icalEvent } : {}) });
   };
 }
 
