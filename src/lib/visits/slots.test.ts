@@ -558,7 +558,7 @@ const slotInput = fc
   });
 
 describe('open slots, for any zone, hours, busy time and step', () => {
-  fcTest.prop([slotInput], { ...(process.env.SLOTS_SEED === 'random' ? {} : { seed: 20261203 }), numRuns: Number(process.env.SLOTS_RUNS ?? 60) })(
+  fcTest.prop([slotInput], { ...(process.env.SLOTS_SEED === 'random' ? {} : { seed: 20261203 }), numRuns: Number(process.env.SLOTS_RUNS ?? 50) })(
     'keep every rule, checked on the zone’s clock through Intl',
     (input) => {
       const slots = openSlots(input);
@@ -581,5 +581,7 @@ describe('open slots, for any zone, hours, busy time and step', () => {
       }
       expect(slots.map((s) => s.start.toISOString())).toEqual(slowSlots(input));
     },
+    // The slow reading walks every minute of a few days; on a busy machine that takes a while.
+    60_000,
   );
 });
