@@ -2,6 +2,7 @@ import ICAL from 'ical.js';
 import { describe, expect, test } from 'vitest';
 import { InvitationInputError, visitCalendarFile, type VisitCalendarInput } from './index.ts';
 
+// Sources of the checks: RFC 5545, RFC 5546 and RFC 6868 as cited beside each (docs/sources.md §70).
 // Demo data: an invented firm and homeowner.
 const booking: VisitCalendarInput = {
   method: 'REQUEST',

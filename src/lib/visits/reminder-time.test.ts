@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { reminderDueAt } from './index.ts';
 
-// Source: IANA tz database (US: second Sunday of March / first Sunday of November at 02:00 local; EU: last Sunday of March / October at 01:00 UTC)
+// Source: IANA tz database (US: second Sunday of March / first Sunday of November at 02:00 local; EU: last Sunday of March / October at 01:00 UTC); docs/sources.md §70
 // So 2026-03-08 in New York is under EDT (UTC−4) from 03:00 on, and 2026-10-25 in London is under
 // GMT (UTC+0) from 01:00 UTC on. Expected instants are written in UTC from those offsets.
 const at = (iso: string) => new Date(iso);
