@@ -170,7 +170,7 @@ describe('the homeowner’s link', () => {
   test('refuses posts from other sites, and posts without our Origin, before changing anything', async () => {
     const { visit, token } = await bookedVisit();
     // Source: OWASP CSRF Prevention Cheat Sheet, "Fetch Metadata" and "Verifying Origin With Standard Headers".
-    const attempts = [
+    const attempts: Record<string, string>[] = [
       { origin: 'https://elsewhere.test', 'sec-fetch-site': 'cross-site' },
       { origin: ORIGIN, 'sec-fetch-site': 'cross-site' },
       { origin: 'null' },

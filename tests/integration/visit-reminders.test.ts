@@ -62,7 +62,7 @@ describe('visit reminders', () => {
     await run('2026-03-08T13:01:00Z');
     // The scheduled job itself, on the server's clock.
     clock!.set('2026-03-08T13:05:00Z');
-    await visitRemindersJob.run({}, { em: em(), send: async () => {} });
+    await visitRemindersJob.run({}, { em: em(), send: async () => null });
     expect(await remindersTo(firm, lead.email)).toHaveLength(2);
   });
 
