@@ -55,6 +55,18 @@ export type BookingRequest = {
   now?: Date;
 };
 
+/**
+ * Takes the firm's booking lock until the transaction ends, so one firm's bookings and moves check
+ * the open slots one at a time and a loser of a race sees the winner's visit (a 409 with the next
+ * open times). Without it, concurrent inserts that overlap wait on each other inside the exclusion
+ * constraint's check and PostgreSQL breaks the circle after `deadlock_timeout` by failing one with
+ * 40P01 (Source: PostgreSQL 15 documentation, §13.3.4 "Deadlocks", and §13.3.5 "Advisory Locks").
+ * The constraint stays the guarantee; the lock only keeps the race orderly.
+ */
+async function lockFirmBookings(tx: EntityManager, companyId: string): Promise<void> {
+  await tx.execute('select pg_advisory_xact_lock(hashtextextended(?, 0))', [`visit-booking:${companyId}`]);
+}
+
 function isOverlapRefusal(error: unknown): boolean {
   return error instanceof DriverException && (error as DriverException & { code?: string }).code === '23P01';
 }
@@ -83,6 +95,7 @@ export async function bookVisit(em: EntityManager, request: BookingRequest): Pro
   const staffBooking = request.via === 'staff';
   try {
     const visit = await em.transactional(async (tx) => {
+      await lockFirmBookings(tx, request.companyId);
       const company = await tx.findOneOrFail(Company, { id: request.companyId });
       const lead = await liveLead(tx, request.companyId, request.leadId);
       const existing = await tx.findOne(Visit, { company: request.companyId, lead, status: 'booked', endsAt: { $gt: at } });
@@ -155,6 +168,7 @@ export async function moveVisit(em: EntityManager, request: MoveRequest): Promis
   let personAsked = request.salespersonId;
   try {
     const visit = await em.transactional(async (tx) => {
+      await lockFirmBookings(tx, request.companyId);
       const company = await tx.findOneOrFail(Company, { id: request.companyId });
       const visit = await visitOfCompany(tx, request.companyId, request.visitId, true);
       if (visit.status !== 'booked') throw new Conflict('Only a booked visit can be moved.', { start: 'This visit is no longer booked.' });
