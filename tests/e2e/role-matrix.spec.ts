@@ -278,6 +278,21 @@ const MATRIX: Row[] = [
     path: (ids) => `/api/app/visits/${ids.cancelledVisit}/cancel`,
     expect: { signedOut: 401, sales: 409, other: 404, owner: 409 },
   },
+  // After the visit: an outcome that is neither done nor no one home, and rooms that are no project (400).
+  {
+    route: '/api/app/visits/[id]/outcome',
+    method: 'POST',
+    path: (ids) => `/api/app/visits/${ids.cancelledVisit}/outcome`,
+    json: { outcome: 'maybe' },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/[id]/measured-rooms',
+    method: 'PUT',
+    path: (ids) => `/api/app/leads/${ids.lead}/measured-rooms`,
+    json: { project: {} },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.
