@@ -58,7 +58,7 @@ export function applyMeasuredEstimate(
   em: EntityManager,
   lead: Lead,
   project: Project,
-  priced: FirmEstimate,
+  priced: Pick<FirmEstimate, 'result' | 'version'>,
   options: { actorUserId: string | null; at: Date },
 ): void {
   const previous = estimateSnapshot.read(lead.estimate);
