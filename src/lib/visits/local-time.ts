@@ -60,6 +60,56 @@ export function firstInstantAtWallClock(wall: WallClock, timeZone: string): Date
   return instantsAtWallClock(wall, timeZone)[0] ?? null;
 }
 
+/** A calendar date (month 1–12). */
+export type CalendarDate = Pick<WallClock, 'year' | 'month' | 'day'>;
+
+/** One local date of a zone: its wall-clock times as instants, and the clock at instants near it. */
+export type LocalDay = {
+  /** The first instant the clock shows `minuteOfDay` (0–1439) on this date, or null if it never does. */
+  firstInstantAt(minuteOfDay: number): Date | null;
+  wallClockAt(at: Date): WallClock;
+};
+
+const HOUR_MS = 60 * 60 * 1000;
+
+/**
+ * The zone's clock on one local date. Reading every candidate time through TZDate costs a few Intl
+ * calls each, and a year of one-minute steps is half a million of them. So the zone's offset is
+ * read (through @date-fns/tz) at three instants spanning the date and 14 hours either side (no zone
+ * is further from UTC, and no zone changes twice within two days): when all three agree, the date
+ * has no change near it and each time is that fixed offset from UTC. A date near a change takes
+ * the careful path above, time by time.
+ */
+export function localDay(date: CalendarDate, timeZone: string): LocalDay {
+  const midnightGuess = new TZDate(date.year, date.month - 1, date.day, 0, 0, timeZone).getTime();
+  const windowStart = midnightGuess - 15 * HOUR_MS;
+  const windowEnd = midnightGuess + 39 * HOUR_MS;
+  const offsets = [windowStart, midnightGuess + 12 * HOUR_MS, windowEnd].map((at) => tzOffset(timeZone, new Date(at)));
+  const steady = offsets.every((offset) => offset === offsets[0]);
+  if (!steady) {
+    return {
+      firstInstantAt: (minute) => firstInstantAtWallClock({ ...date, hour: Math.floor(minute / 60), minute: minute % 60 }, timeZone),
+      wallClockAt: (at) => wallClockAt(at, timeZone),
+    };
+  }
+  const offsetMs = offsets[0]! * 60_000;
+  return {
+    firstInstantAt: (minute) => new Date(Date.UTC(date.year, date.month - 1, date.day, 0, minute) - offsetMs),
+    wallClockAt(at) {
+      const time = at.getTime();
+      if (time < windowStart || time > windowEnd) return wallClockAt(at, timeZone);
+      const shown = new Date(time + offsetMs);
+      return {
+        year: shown.getUTCFullYear(),
+        month: shown.getUTCMonth() + 1,
+        day: shown.getUTCDate(),
+        hour: shown.getUTCHours(),
+        minute: shown.getUTCMinutes(),
+      };
+    },
+  };
+}
+
 /** Whether the runtime's time zone data knows `name` (an IANA name such as `Europe/London`). */
 export function isKnownTimeZone(name: string): boolean {
   try {

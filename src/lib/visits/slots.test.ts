@@ -2,7 +2,7 @@ import { fc, test as fcTest } from '@fast-check/vitest';
 import { describe, expect, test } from 'vitest';
 import { openSlots, SlotInputError, type OpenSlotsInput } from './index.ts';
 
-// Source: IANA tz database (US: second Sunday of March / first Sunday of November at 02:00 local; EU: last Sunday of March / October at 01:00 UTC)
+// Source: IANA tz database (US: second Sunday of March / first Sunday of November at 02:00 local; EU: last Sunday of March / October at 01:00 UTC); docs/sources.md §70
 // In 2026 that is 2026-03-08 and 2026-11-01 for America/New_York (EST = UTC−5, EDT = UTC−4) and
 // 2026-03-29 and 2026-10-25 for Europe/London (GMT = UTC+0, BST = UTC+1). All four are Sundays.
 // Every expected instant below is written in UTC from those offsets.
@@ -558,7 +558,7 @@ const slotInput = fc
   });
 
 describe('open slots, for any zone, hours, busy time and step', () => {
-  fcTest.prop([slotInput], { ...(process.env.SLOTS_SEED === 'random' ? {} : { seed: 20261203 }), numRuns: Number(process.env.SLOTS_RUNS ?? 60) })(
+  fcTest.prop([slotInput], { ...(process.env.SLOTS_SEED === 'random' ? {} : { seed: 20261203 }), numRuns: Number(process.env.SLOTS_RUNS ?? 50) })(
     'keep every rule, checked on the zone’s clock through Intl',
     (input) => {
       const slots = openSlots(input);
@@ -581,5 +581,7 @@ describe('open slots, for any zone, hours, busy time and step', () => {
       }
       expect(slots.map((s) => s.start.toISOString())).toEqual(slowSlots(input));
     },
+    // The slow reading walks every minute of a few days; on a busy machine that takes a while.
+    60_000,
   );
 });

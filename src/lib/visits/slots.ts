@@ -4,7 +4,7 @@
  * `now` and the busy ranges.
  */
 import { addMinutes } from 'date-fns';
-import { firstInstantAtWallClock, wallClockAt, type WallClock } from './local-time.ts';
+import { localDay, wallClockAt, type CalendarDate, type WallClock } from './local-time.ts';
 import { checkSlotInput, minutesOfDay, WEEKDAYS, type Weekday } from './slot-input.ts';
 
 export { SlotInputError } from './slot-input.ts';
@@ -52,12 +52,14 @@ export function openSlots(input: OpenSlotsInput): TimeRange[] {
     const date = calendarDate(today, ahead);
     if (off.has(date.key)) continue;
     const ranges = [...(weekly[date.weekday] ?? [])].map((r) => ({ from: minutesOfDay(r.from), to: minutesOfDay(r.to) })).sort((a, b) => a.from - b.from);
+    if (ranges.length === 0) continue;
+    const day = localDay(date.wall, timeZone);
     for (const { from, to } of ranges) {
       for (let minute = from; minute < to; minute += stepMinutes) {
-        const start = firstInstantAtWallClock({ ...date.wall, hour: Math.floor(minute / 60), minute: minute % 60 }, timeZone);
+        const start = day.firstInstantAt(minute);
         if (!start || start.getTime() < earliestStart) continue;
         const end = addMinutes(start, visitMinutes);
-        if (!endsInRange(end, date.wall, to, timeZone) || isBusy(start.getTime(), end.getTime())) continue;
+        if (!endsInRange(day.wallClockAt(end), date.wall, to) || isBusy(start.getTime(), end.getTime())) continue;
         slots.push({ start, end });
       }
     }
@@ -65,9 +67,8 @@ export function openSlots(input: OpenSlotsInput): TimeRange[] {
   return slots.sort((a, b) => a.start.getTime() - b.start.getTime());
 }
 
-/** Whether the zone's clock at `end` is on the same local date and no later than `to` (minutes after midnight). */
-function endsInRange(end: Date, date: Pick<WallClock, 'year' | 'month' | 'day'>, to: number, timeZone: string): boolean {
-  const seen = wallClockAt(end, timeZone);
+/** Whether the zone's clock at the end (`seen`) is on the same local date and no later than `to` (minutes after midnight). */
+function endsInRange(seen: WallClock, date: CalendarDate, to: number): boolean {
   return seen.year === date.year && seen.month === date.month && seen.day === date.day && seen.hour * 60 + seen.minute <= to;
 }
 
