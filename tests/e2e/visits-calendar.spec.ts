@@ -225,3 +225,18 @@ async function phoneDayList(browser: Browser, day: string) {
     await phone.close();
   }
 }
+
+test('the owner finds Visits under Setup; an unknown time zone is named beside its field and nothing is saved', async ({ page }) => {
+  await signIn(page, 'olive@cedar-hollow.test');
+  await page.goto('/app/setup');
+  await page.getByRole('main').getByRole('link', { name: 'Visits', exact: true }).click();
+  await expect(page).toHaveURL(/\/app\/setup\/visits$/);
+  await hydrated(page);
+  await expect(page.getByLabel('Time zone', { exact: true })).toHaveValue(timeZone);
+  await page.getByLabel('Time zone', { exact: true }).fill('Mars/Olympus_Mons');
+  await page.getByRole('button', { name: 'Save visit settings' }).click();
+  await expect(page.getByText('We do not know this time zone.', { exact: false })).toBeVisible();
+  await expect(page.getByLabel('Time zone', { exact: true })).toHaveAttribute('aria-invalid', 'true');
+  const [firm] = await query<{ time_zone: string }>(`select time_zone from company where slug = 'cedar-hollow'`);
+  expect(firm!.time_zone).toBe(timeZone);
+});
