@@ -27,11 +27,12 @@ async function demoFirmHasHours(): Promise<() => Promise<void>> {
      select gen_random_uuid(), m.company_id, m.id, $1::jsonb, '[]'::jsonb
        from membership m join app_user u on u.id = m.user_id join company c on c.id = m.company_id
       where c.slug = 'cedar-hollow' and u.email = 'sam@cedar-hollow.test'
+     on conflict (membership_id) do nothing
      returning id`,
     [JSON.stringify(weekly)],
   );
   return async () => {
-    await query(`delete from availability where id = $1`, [row!.id]);
+    if (row) await query(`delete from availability where id = $1`, [row.id]);
   };
 }
 

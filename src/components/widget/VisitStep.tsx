@@ -47,15 +47,16 @@ export default function VisitStep({ slug, viewUrl, firmName }: { slug: string; v
   const headingRef = useRef<HTMLHeadingElement>(null);
   const doneRef = useRef<HTMLElement>(null);
   // Moves focus where the view changed, so a keyboard or screen reader user is not left on a button that is gone.
-  const [focusTarget, setFocusTarget] = useState<'heading' | 'done' | null>(null);
+  // Each request is a new object, and only a request moves focus (fresh times arriving do not).
+  const [focusTarget, setFocusTarget] = useState<{ to: 'heading' | 'done' } | null>(null);
   useEffect(() => {
-    if (focusTarget === 'heading') headingRef.current?.focus();
-    if (focusTarget === 'done') doneRef.current?.focus();
-  }, [focusTarget, phase]);
+    if (focusTarget?.to === 'heading') headingRef.current?.focus();
+    if (focusTarget?.to === 'done') doneRef.current?.focus();
+  }, [focusTarget]);
 
   const decline = () => {
     setPhase({ kind: 'declined' });
-    setFocusTarget('done');
+    setFocusTarget({ to: 'done' });
   };
 
   if (phase.kind === 'loading' || phase.kind === 'hidden' || !proof) return null;
@@ -112,7 +113,7 @@ export default function VisitStep({ slug, viewUrl, firmName }: { slug: string; v
               className={BRAND_BUTTON}
               onClick={() => {
                 setPhase({ kind: 'picking', answer: phase.answer });
-                setFocusTarget('heading');
+                setFocusTarget({ to: 'heading' });
               }}
             >
               Show open times
@@ -131,7 +132,7 @@ export default function VisitStep({ slug, viewUrl, firmName }: { slug: string; v
           onAnswer={(answer) => setPhase({ kind: 'picking', answer })}
           onBooked={(start, timeZone) => {
             setPhase({ kind: 'booked', start, timeZone });
-            setFocusTarget('done');
+            setFocusTarget({ to: 'done' });
           }}
           onDecline={decline}
         />
