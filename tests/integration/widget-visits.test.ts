@@ -17,7 +17,7 @@ import { useFakeClock } from '../helpers/fake-clock';
 
 // The widget's visit step. The rules checked here (minimum notice, horizon, days off, a travel
 // buffer, each start once for the public) are Lapwing's own (issue 12); wall-clock times are read
-// with the IANA tz database: America/Chicago is CST, UTC−6, in January (docs/sources.md §70).
+// with the IANA tz database: America/Chicago is CST, UTC−6, in January (docs/sources.md §70); zone names: docs/sources.md §71.
 
 let orm: MikroORM;
 beforeAll(async () => {

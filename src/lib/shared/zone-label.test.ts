@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { zoneLabel } from './zone-label';
 
-// Source: Unicode CLDR time zone names as carried by ECMA-402 Intl.DateTimeFormat (timeZoneName
+// Source: docs/sources.md §71. Unicode CLDR time zone names as carried by ECMA-402 Intl.DateTimeFormat (timeZoneName
 // "longGeneric" and "short", ECMA-402 §11.1.2); UTS #35 Part 4 §7 "Using Time Zone Names" (generic
 // non-location format "Central Time", specific non-location format "CST"). Offsets and clock changes:
 // IANA tz database, America/Chicago and Europe/London (docs/sources.md §70).
