@@ -278,6 +278,52 @@ const MATRIX: Row[] = [
     path: (ids) => `/api/app/visits/${ids.cancelledVisit}/cancel`,
     expect: { signedOut: 401, sales: 409, other: 404, owner: 409 },
   },
+  // After the visit: an outcome that is neither done nor no one home, and rooms that are no project (400).
+  {
+    route: '/api/app/visits/[id]/outcome',
+    method: 'POST',
+    path: (ids) => `/api/app/visits/${ids.cancelledVisit}/outcome`,
+    json: { outcome: 'maybe' },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/leads/[id]/measured-rooms',
+    method: 'PUT',
+    path: (ids) => `/api/app/leads/${ids.lead}/measured-rooms`,
+    json: { project: {} },
+    expect: { signedOut: 401, sales: 400, other: 404, owner: 400 },
+  },
+  // The Visits calendar, hours and settings. Bodies are refused (400) or the caller is (403/404),
+  // so nobody's hours or the firm's settings change.
+  { route: '/app/visits/hours', method: 'GET', path: () => '/app/visits/hours', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
+  { route: '/app/setup/visits', method: 'GET', path: () => '/app/setup/visits', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  {
+    route: '/api/app/visits',
+    method: 'GET',
+    path: () => '/api/app/visits?from=2031-01-06T00:00:00.000Z&to=2031-01-13T00:00:00.000Z',
+    expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
+  },
+  {
+    route: '/api/app/visits/availability/[membershipId]',
+    method: 'GET',
+    path: (ids) => `/api/app/visits/availability/${ids.samMember}`,
+    expect: { signedOut: 401, sales: 200, other: 404, owner: 200 },
+  },
+  {
+    // The owner's hours: Sam may not change them (403); the owner's own call is refused on the field.
+    route: '/api/app/visits/availability/[membershipId]',
+    method: 'PUT',
+    path: (ids) => `/api/app/visits/availability/${ids.oliveMember}`,
+    json: { weekly: { mon: [{ from: '12:00', to: '09:00' }] }, daysOff: [] },
+    expect: { signedOut: 401, sales: 403, other: 404, owner: 400 },
+  },
+  {
+    route: '/api/app/settings/visits',
+    method: 'PUT',
+    path: () => '/api/app/settings/visits',
+    json: { visitMinutes: 60, bufferMinutes: 30, stepMinutes: 30, minNoticeMinutes: 1440, horizonDays: 28, onlineBooking: false, timeZone: 'Nowhere/Atall' },
+    expect: { signedOut: 401, sales: 403, other: 400, owner: 400 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.

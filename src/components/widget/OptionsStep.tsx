@@ -1,6 +1,13 @@
 import { isDamp, type Draft, type FieldErrors, type RoomDraft } from './draft';
 
-type Props = { draft: Draft; errors: FieldErrors; onChange: (patch: Partial<Draft>) => void; onRoomsChange: (rooms: RoomDraft[]) => void };
+type Props = {
+  draft: Draft;
+  errors: FieldErrors;
+  onChange: (patch: Partial<Draft>) => void;
+  onRoomsChange: (rooms: RoomDraft[]) => void;
+  /** Off where the answer is already known (rooms measured on a site visit). */
+  askHowMeasured?: boolean;
+};
 
 function Choice<T extends string>({
   legend,
@@ -47,7 +54,7 @@ function Choice<T extends string>({
   );
 }
 
-export function OptionsStep({ draft, errors, onChange, onRoomsChange }: Props) {
+export function OptionsStep({ draft, errors, onChange, onRoomsChange, askHowMeasured = true }: Props) {
   const yesNo: ['yes' | 'no', string][] = [
     ['yes', 'Yes'],
     ['no', 'No'],
@@ -81,16 +88,18 @@ export function OptionsStep({ draft, errors, onChange, onRoomsChange }: Props) {
         required
         error={errors['project.builtBefore1978']}
       />
-      <Choice
-        legend="How did you get the sizes?"
-        name="measured"
-        value={draft.measuredBy}
-        options={[
-          ['homeowner-estimate', 'My best guess'],
-          ['homeowner-tape', 'I measured with a tape'],
-        ]}
-        onChange={(measuredBy) => onChange({ measuredBy })}
-      />
+      {askHowMeasured && (
+        <Choice
+          legend="How did you get the sizes?"
+          name="measured"
+          value={draft.measuredBy}
+          options={[
+            ['homeowner-estimate', 'My best guess'],
+            ['homeowner-tape', 'I measured with a tape'],
+          ]}
+          onChange={(measuredBy) => onChange({ measuredBy })}
+        />
+      )}
       <fieldset>
         <legend className="field-label">Which rooms get damp? (bathrooms, laundry)</legend>
         <div className="mt-1 space-y-1">

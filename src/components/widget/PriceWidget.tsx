@@ -20,6 +20,9 @@ const loadContactStep = () => import('./ContactStep');
 const loadPhotoPicker = () => import('./PhotoPicker');
 const ContactStep = lazy(() => loadContactStep().then((module) => ({ default: module.ContactStep })));
 const PhotoPicker = lazy(loadPhotoPicker);
+// The optional visit step after Send: loaded with the contact step, so the thank-you need not wait for it.
+const loadVisitStep = () => import('./VisitStep');
+const VisitStep = lazy(loadVisitStep);
 
 export type PriceWidgetProps = {
   slug: string;
@@ -199,6 +202,7 @@ export default function PriceWidget({
       void loadPhotoPicker();
       void loadContactStep();
     }
+    if (STEPS[step]?.id === 'contact') void loadVisitStep();
   }, [step, sent]);
 
   const stepErrorKeys: Record<(typeof STEPS)[number]['id'], (path: string) => boolean> = {
@@ -266,6 +270,11 @@ export default function PriceWidget({
               See your estimate, with drawings of each wall
             </a>
           </p>
+        )}
+        {sent.lead.viewUrl && (
+          <Suspense fallback={null}>
+            <VisitStep slug={slug} viewUrl={sent.lead.viewUrl} firmName={firmName} />
+          </Suspense>
         )}
         {firmPhone && (
           <p>

@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { ApiError, postJson } from './api';
+import { alternativesOf, ApiError, getJson, postJson } from './api';
 
 // Source: docs/sources.md §60 (WHATWG Fetch: an aborted fetch rejects; RFC 9110 §15.6: 5xx means
 // the server failed, so asking again may succeed; a 4xx will not change on a retry).
@@ -91,5 +91,36 @@ describe('postJson', () => {
     const error = (await postJson('/x', {}, { timeoutMs: 20000, retries: 0, fetchImpl }).catch((e: unknown) => e)) as ApiError;
     expect(fetchImpl).toHaveBeenCalledTimes(1);
     expect(error.retryable).toBe(true);
+  });
+
+  it('keeps the rest of an error answer, so a 409 can offer its other open times', async () => {
+    const alternatives = [{ start: '2027-01-05T16:30:00.000Z', end: '2027-01-05T17:30:00.000Z' }];
+    const fetchImpl = vi.fn().mockResolvedValue(json(409, { error: 'Taken', fields: { start: 'Taken' }, alternatives }));
+    const error = (await postJson('/x', {}, { timeoutMs: 20000, retries: 0, fetchImpl }).catch((e: unknown) => e)) as ApiError;
+    expect(error.status).toBe(409);
+    expect(alternativesOf(error)).toEqual(alternatives);
+    expect(alternativesOf(new ApiError('Down', 503))).toEqual([]);
+  });
+});
+
+describe('getJson', () => {
+  it('sends a GET with no body, and retries it within the same time limit', async () => {
+    vi.useFakeTimers();
+    const fetchImpl = vi
+      .fn()
+      .mockRejectedValueOnce(new TypeError('Failed to fetch'))
+      .mockResolvedValueOnce(json(200, { slots: [] }));
+    const outcome = getJson('/x?lead=1', { timeoutMs: 8000, retries: 1, fetchImpl });
+    await vi.advanceTimersByTimeAsync(1000);
+    expect(await outcome).toEqual({ slots: [] });
+    expect(fetchImpl).toHaveBeenLastCalledWith('/x?lead=1', expect.objectContaining({ method: 'GET' }));
+    expect(fetchImpl.mock.lastCall?.[1]).not.toHaveProperty('body');
+  });
+
+  it('gives up on a server that never answers', async () => {
+    vi.useFakeTimers();
+    const outcome = getJson('/x', { timeoutMs: 8000, retries: 1, fetchImpl: vi.fn(stalled) }).catch((error: unknown) => error);
+    await vi.advanceTimersByTimeAsync(8000);
+    expect(((await outcome) as ApiError).kind).toBe('timeout');
   });
 });

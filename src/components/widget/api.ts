@@ -1,6 +1,7 @@
 import type { ProjectInput } from '~/lib/estimate/index.ts';
 import type { HomeownerEstimate } from '~/lib/shared/homeowner-estimate';
 import type { ContactInput } from '~/lib/shared/lead-schemas';
+import type { InquiryProof, PublicSlot, WidgetSlotsAnswer, WidgetVisitAnswer } from '~/lib/shared/widget-visit-schemas';
 
 /** Why a request failed: what the homeowner can do about it differs for each. */
 export type FailureKind = 'timeout' | 'network' | 'server' | 'input';
@@ -11,6 +12,8 @@ export class ApiError extends Error {
     readonly status: number,
     readonly fields: Record<string, string> = {},
     readonly kind: FailureKind = status === 0 ? 'network' : status >= 500 ? 'server' : 'input',
+    /** The rest of the error answer (a 409's `alternatives`, say). */
+    readonly body: Record<string, unknown> = {},
   ) {
     super(message);
   }
@@ -40,7 +43,16 @@ export type PostOptions = {
 
 const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
-export async function postJson<T>(url: string, body: unknown, { timeoutMs, retries, fetchImpl = fetch }: PostOptions): Promise<T> {
+export function postJson<T>(url: string, body: unknown, options: PostOptions): Promise<T> {
+  return requestJson<T>('POST', url, body, options);
+}
+
+/** A GET with the same time limit, retries and error handling as `postJson`. */
+export function getJson<T>(url: string, options: PostOptions): Promise<T> {
+  return requestJson<T>('GET', url, undefined, options);
+}
+
+async function requestJson<T>(method: 'GET' | 'POST', url: string, body: unknown, { timeoutMs, retries, fetchImpl = fetch }: PostOptions): Promise<T> {
   // One deadline for every attempt: a retry never restarts the clock the homeowner is watching.
   const controller = new AbortController();
   const timer = setTimeout(() => controller.abort(), timeoutMs);
@@ -49,7 +61,7 @@ export async function postJson<T>(url: string, body: unknown, { timeoutMs, retri
   try {
     for (let attempt = 0; ; attempt++) {
       try {
-        return await Promise.race([once<T>(fetchImpl, url, body, controller.signal), timedOut]);
+        return await Promise.race([once<T>(fetchImpl, method, url, body, controller.signal), timedOut]);
       } catch (error) {
         const failure = error instanceof ApiError ? error : new ApiError(SERVER_FAILED, 0);
         if (controller.signal.aborted) throw new ApiError(TOO_SLOW, 0, {}, 'timeout');
@@ -62,17 +74,20 @@ export async function postJson<T>(url: string, body: unknown, { timeoutMs, retri
   }
 }
 
-async function once<T>(fetchImpl: typeof fetch, url: string, body: unknown, signal: AbortSignal): Promise<T> {
+async function once<T>(fetchImpl: typeof fetch, method: 'GET' | 'POST', url: string, body: unknown, signal: AbortSignal): Promise<T> {
   let response: Response;
   try {
-    response = await fetchImpl(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body), signal });
+    response = await fetchImpl(
+      url,
+      method === 'GET' ? { method, signal } : { method, headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body), signal },
+    );
   } catch {
     throw new ApiError(UNREACHABLE, 0);
   }
   const data = await response.json().catch(() => ({}));
   if (!response.ok) {
     const fallback = response.status >= 500 ? SERVER_FAILED : 'Something went wrong. Please try again.';
-    throw new ApiError(typeof data.error === 'string' ? data.error : fallback, response.status, data.fields ?? {});
+    throw new ApiError(typeof data.error === 'string' ? data.error : fallback, response.status, data.fields ?? {}, undefined, data);
   }
   return data as T;
 }
@@ -91,4 +106,27 @@ export function sendLead(
   body: { formToken: string; idempotencyKey: string; project: ProjectInput; contact: ContactInput; website?: string },
 ): Promise<SentLead> {
   return postJson<SentLead>(`/api/embed/${slug}/leads`, body, { timeoutMs: SEND_TIMEOUT_MS, retries: 0 });
+}
+
+export const SLOTS_TIMEOUT_MS = 8000;
+export const BOOK_TIMEOUT_MS = 20_000;
+
+/** The open visit times for the inquiry just sent (the assignee's, or the team's). */
+export function fetchVisitSlots(slug: string, proof: InquiryProof): Promise<WidgetSlotsAnswer> {
+  const query = new URLSearchParams({ lead: proof.lead, key: proof.key });
+  return getJson<WidgetSlotsAnswer>(`/api/embed/${slug}/slots?${query}`, { timeoutMs: SLOTS_TIMEOUT_MS, retries: 1 });
+}
+
+/**
+ * No automatic retry: a booking that reached the server before the connection dropped is kept, so
+ * the homeowner decides to press Book again (and is then told the inquiry already has its visit).
+ */
+export function bookVisitTime(slug: string, body: InquiryProof & { start: string; note?: string }): Promise<WidgetVisitAnswer> {
+  return postJson<WidgetVisitAnswer>(`/api/embed/${slug}/visits`, body, { timeoutMs: BOOK_TIMEOUT_MS, retries: 0 });
+}
+
+/** The next open times a 409 offered instead (none when it offered none). */
+export function alternativesOf(error: ApiError): PublicSlot[] {
+  const offered = error.body.alternatives;
+  return Array.isArray(offered) ? offered.filter((s): s is PublicSlot => typeof s?.start === 'string' && typeof s?.end === 'string') : [];
 }

@@ -42,6 +42,8 @@ export function describeLeadEvent(kind: LeadEventKind | string, data: Data, date
       return [text(data.subject) ? `“${text(data.subject)}”` : 'E-mail', text(data.to) ? `to ${text(data.to)}` : null].filter(Boolean).join(' ');
     case 'visit':
       return text(data.text) ?? (text(data.at) ? `Visit on ${date(text(data.at)!)}` : 'Visit');
+    case 're-estimated':
+      return text(data.text) ?? 'Re-priced from the measured rooms';
     case 'merged':
       return text(data.otherReference) ? `${data.kept === false ? 'Merged into' : 'Merged with'} ${text(data.otherReference)}` : 'Merged';
     case 'deleted':

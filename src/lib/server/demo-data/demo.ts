@@ -10,6 +10,7 @@ import { storedRateBook } from '../rates/stored-rate-book';
 import { sampleRateBook, type RateBookInput } from '~/lib/estimate';
 import { seedDemoLeads } from './demo-leads';
 import { seedDemoPhotos } from './demo-photos';
+import { seedDemoVisits } from './demo-visits';
 
 export const DEMO_PASSWORD = 'lapwing-demo-2026';
 
@@ -122,6 +123,7 @@ export async function seedDemo(em: EntityManager): Promise<string> {
     }
     created += await seedDemoLeads(em, company, published, storedRateBook.read(published.data), firm.servicePostcodes);
     created += await seedDemoPhotos(em, company);
+    created += await seedDemoVisits(em, company, published, storedRateBook.read(published.data));
   }
   return created ? `${created} rows added` : 'already present';
 }

@@ -16,7 +16,7 @@ export function corsHeaders(request: Request, company: Company): Record<string, 
   const headers: Record<string, string> = { Vary: 'Origin' };
   if (origin) {
     headers['Access-Control-Allow-Origin'] = origin;
-    headers['Access-Control-Allow-Methods'] = 'POST, DELETE, OPTIONS';
+    headers['Access-Control-Allow-Methods'] = 'GET, POST, DELETE, OPTIONS';
     headers['Access-Control-Allow-Headers'] = 'Content-Type';
     headers['Access-Control-Max-Age'] = '600';
   }
