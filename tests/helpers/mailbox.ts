@@ -12,6 +12,19 @@ export type ReceivedMail = {
   html: string;
   replyTo?: string;
   messageId?: string;
+  /** Every non-text part: attachments, and alternatives such as a text/calendar invitation. */
+  parts: MailPart[];
+};
+
+export type MailPart = {
+  /** `text/calendar`, `application/ics`, … */
+  contentType: string;
+  /** The Content-Type's parameters (a calendar part's `method`). */
+  params: Record<string, string>;
+  filename?: string;
+  /** `attachment`, `inline`, or none (an alternative of the body). */
+  disposition?: string;
+  content: string;
 };
 
 function mailDir(): string {
@@ -36,6 +49,16 @@ async function readAll(): Promise<ReceivedMail[]> {
         html: typeof parsed.html === 'string' ? parsed.html : '',
         replyTo: parsed.replyTo?.value[0]?.address,
         messageId: parsed.messageId,
+        parts: parsed.attachments.map((a) => {
+          const type = a.headers.get('content-type') as { value?: string; params?: Record<string, string> } | undefined;
+          return {
+            contentType: a.contentType,
+            params: type?.params ?? {},
+            filename: a.filename,
+            disposition: a.contentDisposition,
+            content: a.content.toString('utf8'),
+          };
+        }),
       };
     }),
   );

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { canonicalPath, isStaffApiPath, isStaffPagePath, needsSameOrigin } from './paths';
+import { canonicalPath, isHomeownerVisitPath, isStaffApiPath, isStaffPagePath, needsSameOrigin } from './paths';
 
 describe('canonicalPath', () => {
   // Source: RFC 3986 §5.4.2 (abnormal examples) and §5.2.4 (remove_dot_segments walk-through).
@@ -36,5 +36,16 @@ describe('canonicalPath', () => {
     for (const path of ['/', '/app', '/app/', '/app/leads/0b5e1c9a-8a53-4d43-9f7e-1f0e2e6a5c11', '/embed/cedar-hollow', '/widget.js', '/reset/abc_DEF-123']) {
       expect(canonicalPath(path)).toBe(path);
     }
+  });
+});
+
+describe('the homeowner’s visit link', () => {
+  test('its page and routes need our own origin for writes, and are not the staff area', () => {
+    for (const path of ['/visit/abc.def', '/api/visit/abc.def/move', '/api/visit/abc.def/cancel']) {
+      expect(isHomeownerVisitPath(path), path).toBe(true);
+      expect(needsSameOrigin(path), path).toBe(true);
+      expect(isStaffPagePath(path) || isStaffApiPath(path), path).toBe(false);
+    }
+    for (const path of ['/visits', '/visitor', '/api/visitors', '/app/visits']) expect(isHomeownerVisitPath(path), path).toBe(false);
   });
 });

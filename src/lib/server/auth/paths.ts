@@ -13,9 +13,16 @@ export function isStaffApiPath(pathname: string): boolean {
   return /^\/api\/app(\/|$)/.test(pathname);
 }
 
+/** The homeowner's own link to a visit (`/visit/TOKEN`) and its routes: no session, our pages only. */
+export function isHomeownerVisitPath(pathname: string): boolean {
+  return /^\/(api\/)?visit(\/|$)/.test(pathname);
+}
+
 /** Where a request that changes something must come from our own pages (see csrf.ts). */
 export function needsSameOrigin(pathname: string): boolean {
-  return isStaffPagePath(pathname) || isStaffApiPath(pathname) || /^\/(api\/auth|login|logout|invite|reset)(\/|$)/.test(pathname);
+  return (
+    isStaffPagePath(pathname) || isStaffApiPath(pathname) || isHomeownerVisitPath(pathname) || /^\/(api\/auth|login|logout|invite|reset)(\/|$)/.test(pathname)
+  );
 }
 
 /** Only paths inside the staff area are followed after sign-in, so a link cannot send people elsewhere. */

@@ -2,7 +2,7 @@ import { defineMiddleware } from 'astro:middleware';
 import { listFirmsOfUser } from '../users/memberships';
 import { clearSessionCookie, readSessionToken, setSessionCookie } from './cookies';
 import { getLucia } from './lucia';
-import { isPublicWidgetPath } from './paths';
+import { isHomeownerVisitPath, isPublicWidgetPath } from './paths';
 import { setSessionFirm } from './sessions';
 
 /** Lucia's tokens: 25 random bytes in lower-case base32. Anything else is not looked up. */
@@ -18,7 +18,8 @@ export const session = defineMiddleware(async (context, next) => {
   locals.session = null;
   locals.membership = null;
   locals.memberships = [];
-  if (isPublicWidgetPath(context.url.pathname)) return next();
+  // The widget and the homeowner's visit link are for people outside the firm: no staff session there.
+  if (isPublicWidgetPath(context.url.pathname) || isHomeownerVisitPath(context.url.pathname)) return next();
 
   const token = readSessionToken(cookies);
   if (!token) return next();

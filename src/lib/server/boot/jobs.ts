@@ -6,6 +6,7 @@ import { followUpRemindersJob } from '../leads/follow-up-reminders';
 import { purgeDeletedLeadsJob } from '../intake/purge-deleted-leads';
 import { morningDigestJob } from '../intake/morning-digest';
 import { overdueTriageJob } from '../leads/triage-refresh';
+import { visitRemindersJob } from '../visits/visit-reminders';
 
 // Each job has its own data type; the list holds them all.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -16,4 +17,5 @@ export const backgroundJobs: readonly JobDefinition<any>[] = [
   purgeDeletedLeadsJob,
   morningDigestJob,
   overdueTriageJob,
+  visitRemindersJob,
 ];

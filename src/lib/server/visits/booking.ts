@@ -11,6 +11,7 @@
 import { DriverException, LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { formatInZone } from '~/lib/shared/time';
+import { reminderDueAt } from '~/lib/visits';
 import { isId } from '~/lib/shared/ids';
 import type { VisitBookedVia, VisitCancelledBy, SlotView } from '~/lib/shared/visit-schemas';
 import type { LeadStage } from '~/lib/shared/labels';
@@ -103,8 +104,8 @@ export async function bookVisit(em: EntityManager, request: BookingRequest): Pro
         bookedVia: request.via,
         bookedBy: request.bookedByUserId ? tx.getReference(User, request.bookedByUserId) : null,
         note: request.note?.trim() || null,
-        // When the day-before reminder is due: set by the reminders (visit-reminders.ts).
-        reminderDueAt: null,
+        // The day-before reminder (visit-reminders.ts): 09:00 on the firm's clock, or at once.
+        reminderDueAt: reminderDueAt(slot.start, company.timeZone, at),
       });
       if (BEFORE_VISIT.includes(lead.stage)) {
         recordLeadEvent(tx, lead, 'stage-moved', { actorUserId: request.bookedByUserId ?? null, at, data: { from: lead.stage, to: 'visit-booked' } });
@@ -164,9 +165,11 @@ export async function moveVisit(em: EntityManager, request: MoveRequest): Promis
       visit.startsAt = slot.start;
       visit.endsAt = slot.end;
       visit.blockedUntil = new Date(slot.end.getTime() + company.visitBufferMinutes * 60_000);
+      const previousSalespersonId = visit.salesperson?.id ?? null;
       visit.salesperson = tx.getReference(Membership, slot.salespersonId);
       visit.sequence += 1;
-      visit.reminderDueAt = null;
+      // A reminder for the new time, even if the old one was sent.
+      visit.reminderDueAt = reminderDueAt(slot.start, company.timeZone, at);
       visit.reminderSentAt = null;
       const lead = await tx.findOneOrFail(Lead, { id: visit.lead.id, company: request.companyId });
       await tx.flush();
@@ -181,7 +184,7 @@ export async function moveVisit(em: EntityManager, request: MoveRequest): Promis
           by: request.by,
         },
       });
-      await queueVisitMails(tx, visit, 'moved');
+      await queueVisitMails(tx, visit, 'moved', { by: request.by, previousSalespersonId });
       return visit;
     });
     kickMailDelivery();
