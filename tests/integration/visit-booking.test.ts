@@ -189,3 +189,27 @@ describe('booking a site visit', () => {
     expect((await em().findOneOrFail(Visit, { id: booked.id })).status).toBe('booked');
   });
 });
+
+describe('the database’s own guarantee', () => {
+  test('an overlapping visit written straight to the table, past every check of the app, is refused by the exclusion constraint', async () => {
+    clock = useFakeClock('2027-01-04T12:00:00Z');
+    const firm = await firmWithHours();
+    const [a, b] = await leadsOf(firm.company.id, 2);
+    expect((await book(firm.sid, a!, { start: '2027-01-05T14:00:00.000Z', salespersonId: firm.sid.membership.id })).status).toBe(201);
+    const insert = (leadId: string, start: string, end: string, until: string, status = 'booked') =>
+      em()
+        .getConnection()
+        .execute(
+          `insert into "visit" ("id", "company_id", "lead_id", "salesperson_id", "starts_at", "ends_at", "blocked_until", "status", "booked_via")
+           values (gen_random_uuid(), ?, ?, ?, ?, ?, ?, ?, 'staff')`,
+          [firm.company.id, leadId, firm.sid.membership.id, start, end, until, status],
+        );
+    // 10:00–11:00 EST starts inside the first visit's 09:00–10:30 (its end plus the 30-minute buffer).
+    // Source: PostgreSQL 15 documentation, §5.4.6 "Exclusion Constraints" (error 23P01).
+    await expect(insert(b!, '2027-01-05T15:00:00Z', '2027-01-05T16:00:00Z', '2027-01-05T16:30:00Z')).rejects.toMatchObject({ code: '23P01' });
+    // Half-open ranges: starting exactly when the first one's buffer ends is allowed, and a cancelled
+    // visit blocks nothing.
+    await expect(insert(b!, '2027-01-05T15:30:00Z', '2027-01-05T16:30:00Z', '2027-01-05T17:00:00Z')).resolves.toBeDefined();
+    await expect(insert(b!, '2027-01-05T14:00:00Z', '2027-01-05T15:00:00Z', '2027-01-05T15:30:00Z', 'cancelled')).resolves.toBeDefined();
+  });
+});

@@ -67,8 +67,14 @@ async function lockFirmBookings(tx: EntityManager, companyId: string): Promise<v
   await tx.execute('select pg_advisory_xact_lock(hashtextextended(?, 0))', [`visit-booking:${companyId}`]);
 }
 
+/**
+ * The database refused the visit as overlapping another (23P01, exclusion violation), or broke a
+ * wait between two overlapping inserts by failing this one (40P01, deadlock; the firm's lock should
+ * prevent that, but another writer of `visit` would not take it). Either way the time was lost.
+ */
 function isOverlapRefusal(error: unknown): boolean {
-  return error instanceof DriverException && (error as DriverException & { code?: string }).code === '23P01';
+  const code = error instanceof DriverException ? (error as DriverException & { code?: string }).code : undefined;
+  return code === '23P01' || code === '40P01';
 }
 
 /** The slot chosen among the open ones: an exact start, for the person asked for or the best one free. */
