@@ -1,7 +1,7 @@
-import { expect, test, type FrameLocator, type Page } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 import { query } from '../helpers/app-database';
-import { openWidgetOnDemoSite, waitUntilAPersonCouldSend } from './helpers/embed';
+import { openWidgetOnDemoSite, priceAndSend } from './helpers/embed';
 
 // The widget's optional visit step after Send, on the demo firm's site at phone width.
 // Sources: WCAG 2.2 success criteria at levels A and AA, as tagged by axe-core; docs/sources.md §60
@@ -40,32 +40,6 @@ async function expectNoViolations(page: Page, step: string) {
   const results = await new AxeBuilder({ page }).include('iframe[title="Price your walls"]').withTags(WCAG_AA).analyze();
   const summary = results.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
   expect(summary, `axe violations on the ${step}`).toEqual([]);
-}
-
-/** One room, board and batten, straight through to Send. */
-async function priceAndSend(page: Page, widget: FrameLocator, email: string) {
-  await widget.getByLabel('Which room?').first().fill('Front hall');
-  await widget.getByRole('textbox', { name: 'Room length' }).fill("12'");
-  await widget.getByRole('textbox', { name: 'Room width' }).fill("6'");
-  await widget.getByRole('textbox', { name: 'Ceiling height' }).fill("8'");
-  await widget.getByRole('button', { name: 'Next' }).click();
-  await widget.getByText('Board and batten').first().click();
-  await widget.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('36"');
-  await widget.getByRole('button', { name: 'Next' }).click();
-  await widget.getByText('Not sure', { exact: true }).click();
-  await widget.getByRole('button', { name: 'Next' }).click();
-  await widget.getByRole('button', { name: 'Next' }).click();
-  await expect(widget.getByTestId('result-range')).toContainText('$', { timeout: 10_000 });
-  await widget.getByRole('button', { name: /Send it to/ }).click();
-  await widget.getByRole('textbox', { name: 'Your name', exact: true }).fill('Wren Halloway');
-  await widget.getByRole('textbox', { name: 'E-mail', exact: true }).fill(email);
-  await widget.getByRole('textbox', { name: 'Phone', exact: true }).fill('(512) 555-0176');
-  await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('14 Sorrel Way');
-  await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
-  await widget.getByLabel(/may contact me/).check();
-  await waitUntilAPersonCouldSend(page);
-  await widget.getByRole('button', { name: /Send to/ }).click();
-  await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
 }
 
 test('a homeowner prices, sends, picks a visit time on the firm’s clock by keyboard, and sees the booking confirmed', async ({ page }) => {

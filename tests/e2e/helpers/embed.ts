@@ -73,3 +73,29 @@ export async function waitUntilAPersonCouldSend(page: Page): Promise<void> {
 export async function asANewVisitor(): Promise<void> {
   await query(`delete from rate_limit where key like 'embed-leads:address:%'`);
 }
+
+/** One room, board and batten, straight through to Send. */
+export async function priceAndSend(page: Page, widget: FrameLocator, email: string, name = 'Wren Halloway') {
+  await widget.getByLabel('Which room?').first().fill('Front hall');
+  await widget.getByRole('textbox', { name: 'Room length' }).fill("12'");
+  await widget.getByRole('textbox', { name: 'Room width' }).fill("6'");
+  await widget.getByRole('textbox', { name: 'Ceiling height' }).fill("8'");
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await widget.getByText('Board and batten').first().click();
+  await widget.getByRole('textbox', { name: /Height to the top of the cap rail/ }).fill('36"');
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await widget.getByText('Not sure', { exact: true }).click();
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await widget.getByRole('button', { name: 'Next' }).click();
+  await expect(widget.getByTestId('result-range')).toContainText('$', { timeout: 10_000 });
+  await widget.getByRole('button', { name: /Send it to/ }).click();
+  await widget.getByRole('textbox', { name: 'Your name', exact: true }).fill(name);
+  await widget.getByRole('textbox', { name: 'E-mail', exact: true }).fill(email);
+  await widget.getByRole('textbox', { name: 'Phone', exact: true }).fill('(512) 555-0176');
+  await widget.getByRole('textbox', { name: 'Street address', exact: true }).fill('14 Sorrel Way');
+  await widget.getByRole('textbox', { name: 'ZIP or postcode', exact: true }).fill('78704');
+  await widget.getByLabel(/may contact me/).check();
+  await waitUntilAPersonCouldSend(page);
+  await widget.getByRole('button', { name: /Send to/ }).click();
+  await expect(widget.getByRole('heading', { name: /Thank you/ })).toBeVisible({ timeout: 15_000 });
+}
