@@ -3,7 +3,7 @@
  * the dialogs offer to pick from.
  */
 import type { SlotView } from '~/lib/shared/visit-schemas';
-import { RequestFailed } from '~/components/inquiries/page/api';
+import { callJson, RequestFailed } from '~/components/inquiries/page/api';
 
 export class VisitRequestFailed extends RequestFailed {
   constructor(
@@ -17,34 +17,13 @@ export class VisitRequestFailed extends RequestFailed {
   }
 }
 
-const UNREACHABLE = 'We could not reach the server. Check your connection, then try again.';
-
-export async function visitRequest<T>(method: 'GET' | 'POST' | 'PUT', url: string, body?: unknown): Promise<T> {
-  let response: Response;
-  try {
-    response = await fetch(url, {
-      method,
-      headers: body === undefined ? {} : { 'content-type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-      credentials: 'same-origin',
-    });
-  } catch (error) {
-    if (error instanceof TypeError) throw new VisitRequestFailed(UNREACHABLE, 0, {}, []);
-    throw error;
-  }
-  const answer = (await response.json().catch((error: unknown) => {
-    if (error instanceof SyntaxError) return {};
-    throw error;
-  })) as { error?: string; fields?: Record<string, string>; alternatives?: SlotView[] };
-  if (!response.ok) {
-    throw new VisitRequestFailed(
-      answer.error ?? 'Something went wrong on our side. Please try again.',
-      response.status,
-      answer.fields ?? {},
-      answer.alternatives ?? [],
-    );
-  }
-  return answer as T;
+export function visitRequest<T>(method: 'GET' | 'POST' | 'PUT', url: string, body?: unknown): Promise<T> {
+  return callJson<T>(
+    method,
+    url,
+    body,
+    (message, status, answer) => new VisitRequestFailed(message, status, answer.fields ?? {}, (answer.alternatives as SlotView[] | undefined) ?? []),
+  );
 }
 
 export const getVisitJson = <T>(url: string) => visitRequest<T>('GET', url);

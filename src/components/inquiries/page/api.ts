@@ -14,7 +14,16 @@ export class RequestFailed extends Error {
 
 const UNREACHABLE = 'We could not reach the server. Check your connection, then try again.';
 
-async function call<T>(method: string, url: string, body?: unknown): Promise<T> {
+/** What the server answered beside the status: `{"error","fields"}` and whatever else a route adds. */
+export type RefusalBody = { error?: string; fields?: Record<string, string>; [more: string]: unknown };
+
+/** Turns a refusal into the error a caller throws (status 0 with an empty body: the server was not reached). */
+export type RefusalToError = (message: string, status: number, body: RefusalBody) => Error;
+
+const asRequestFailedError: RefusalToError = (message, status, body) => new RequestFailed(message, status, body.fields);
+
+/** One JSON request of the staff islands; a refusal becomes `refused(...)` (by default a `RequestFailed`). */
+export async function callJson<T>(method: string, url: string, body?: unknown, refused: RefusalToError = asRequestFailedError): Promise<T> {
   let response: Response;
   try {
     response = await fetch(url, {
@@ -24,17 +33,19 @@ async function call<T>(method: string, url: string, body?: unknown): Promise<T> 
       credentials: 'same-origin',
     });
   } catch (error) {
-    if (error instanceof TypeError) throw new RequestFailed(UNREACHABLE, 0);
+    if (error instanceof TypeError) throw refused(UNREACHABLE, 0, {});
     throw error;
   }
   if (response.status === 204) return undefined as T;
   const answer = (await response.json().catch((error: unknown) => {
     if (error instanceof SyntaxError) return {};
     throw error;
-  })) as { error?: string; fields?: Record<string, string> };
-  if (!response.ok) throw new RequestFailed(answer.error ?? 'Something went wrong on our side. Please try again.', response.status, answer.fields);
+  })) as RefusalBody;
+  if (!response.ok) throw refused(answer.error ?? 'Something went wrong on our side. Please try again.', response.status, answer);
   return answer as T;
 }
+
+const call = <T>(method: string, url: string, body?: unknown) => callJson<T>(method, url, body);
 
 export const getJson = <T>(url: string) => call<T>('GET', url);
 export const sendJson = <T>(method: 'POST' | 'PUT' | 'PATCH' | 'DELETE', url: string, body?: unknown) => call<T>(method, url, body);
