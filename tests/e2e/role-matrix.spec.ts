@@ -20,6 +20,8 @@ type Ids = {
   receivedEvent: string;
   phoneLead: string;
   cancelledVisit: string;
+  publishedRates: string;
+  replay: string;
 };
 type Row = {
   route: string;
@@ -324,6 +326,62 @@ const MATRIX: Row[] = [
     json: { visitMinutes: 60, bufferMinutes: 30, stepMinutes: 30, minNoticeMinutes: 1440, horizonDays: 28, onlineBooking: false, timeZone: 'Nowhere/Atall' },
     expect: { signedOut: 401, sales: 403, other: 400, owner: 400 },
   },
+  // The Rate book: owners only, and hidden from sales (404, as if the pages did not exist). Opening
+  // the draft that the demo firm already has changes nothing; saves and publishes with revision 0 are
+  // refused on the field (400), so no caller changes any numbers.
+  { route: '/api/app/rates', method: 'GET', path: () => '/api/app/rates', expect: { signedOut: 401, sales: 404, other: 200, owner: 200 } },
+  {
+    route: '/api/app/rates/compare',
+    method: 'GET',
+    path: (ids) => `/api/app/rates/compare?before=${ids.publishedRates}&after=${ids.publishedRates}`,
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 200 },
+  },
+  {
+    route: '/api/app/rates/draft',
+    method: 'POST',
+    path: () => '/api/app/rates/draft',
+    json: {},
+    expect: { signedOut: 401, sales: 404, other: 200, owner: 200 },
+  },
+  {
+    route: '/api/app/rates/draft',
+    method: 'PUT',
+    path: () => '/api/app/rates/draft',
+    json: { revision: 0, data: {} },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/rates/draft',
+    method: 'DELETE',
+    path: () => '/api/app/rates/draft',
+    json: { revision: 0 },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/rates/draft/publish',
+    method: 'POST',
+    path: () => '/api/app/rates/draft/publish',
+    json: { revision: 0 },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/rates/draft/preview',
+    method: 'GET',
+    path: () => '/api/app/rates/draft/preview',
+    expect: { signedOut: 401, sales: 404, other: 200, owner: 200 },
+  },
+  {
+    route: '/api/app/rates/draft/replay',
+    method: 'POST',
+    path: () => '/api/app/rates/draft/replay',
+    expect: { signedOut: 401, sales: 404, other: 200, owner: 200 },
+  },
+  {
+    route: '/api/app/rates/draft/replay/[id]',
+    method: 'GET',
+    path: (ids) => `/api/app/rates/draft/replay/${ids.replay}`,
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 200 },
+  },
 ];
 
 // Owners last, so the destructive calls of everyone else meet the rows still in place.
@@ -376,7 +434,14 @@ test.beforeAll(async () => {
      from "lead" l where l."id" = $1 returning "id"`,
     [lead!.id],
   );
+  const [publishedRates] = await query<{ id: string }>(
+    `select v.id from rate_book_version v join company c on c.id = v.company_id where c.slug = 'cedar-hollow' and v.status = 'published'`,
+  );
+  const replay = await clients.owner.post('/api/app/rates/draft/replay');
+  expect([200, 202]).toContain(replay.status());
   ids = {
+    publishedRates: publishedRates!.id,
+    replay: (await replay.json()).id,
     samMember: member('sam@cedar-hollow.test'),
     oliveMember: member('olive@cedar-hollow.test'),
     invite: (await invite.json()).id,
