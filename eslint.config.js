@@ -20,7 +20,7 @@ const BELOW_DOMAINS = [...FOUNDATION, 'db', 'rate-limit'];
 const DOMAINS_BELOW_AUTH = [...BELOW_DOMAINS, 'companies', 'jobs', 'users', 'mail', 'storage', 'rates'];
 const BELOW_VISITS = [...DOMAINS_BELOW_AUTH, 'auth', 'estimates', 'leads', 'team'];
 const BELOW_PHOTOS = [...BELOW_VISITS, 'visits'];
-const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake'];
+const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake', 'rate-preview'];
 
 /** @type {[unit: string, mayImport: string[]][]} */
 const SERVER_LAYERS = [
@@ -47,7 +47,7 @@ const SERVER_LAYERS = [
   ['users', [...BELOW_DOMAINS, 'companies']],
   ['mail', [...BELOW_DOMAINS, 'companies', 'jobs']],
   ['storage', [...BELOW_DOMAINS, 'companies']],
-  ['rates', [...BELOW_DOMAINS, 'companies']],
+  ['rates', [...BELOW_DOMAINS, 'companies', 'users']],
   ['auth', DOMAINS_BELOW_AUTH],
   ['estimates', DOMAINS_BELOW_AUTH],
   ['leads', [...DOMAINS_BELOW_AUTH, 'auth', 'estimates']],
@@ -58,6 +58,8 @@ const SERVER_LAYERS = [
   ['embed', [...BELOW_PHOTOS, 'photos']],
   // Inquiries coming in and kept tidy: staff-entered inquiries, merging, purging deleted ones, the morning digest.
   ['intake', [...BELOW_PHOTOS, 'photos']],
+  // What a Rate book draft would do: sample rooms and recent inquiries priced with it beside the published version.
+  ['rate-preview', BELOW_PHOTOS],
   // Middleware pieces (glue for src/middleware.ts).
   ['request-log', BELOW_BOOT],
   ['failures', BELOW_BOOT],

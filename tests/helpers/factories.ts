@@ -11,7 +11,10 @@ import { leadInputs } from '../../src/lib/server/leads/lead-inputs';
 import { RateBookVersion } from '../../src/lib/server/rates/rate-book-version.entity';
 import { storedRateBook } from '../../src/lib/server/rates/stored-rate-book';
 
-/** A rate book version of a firm (a draft unless said otherwise), numbered so it never collides. */
+/**
+ * A rate book version of a firm, numbered so it never collides: retired unless said otherwise (a firm
+ * has at most one draft and one published version, and a lead's version is one of its old ones).
+ */
 export function buildRateBookVersion(
   em: EntityManager,
   companyId: string,
@@ -20,7 +23,7 @@ export function buildRateBookVersion(
   return em.create(RateBookVersion, {
     company: companyId,
     number: overrides.number ?? Math.floor(Math.random() * 1e9),
-    status: overrides.status ?? 'draft',
+    status: overrides.status ?? 'retired',
     data: storedRateBook.wrap(overrides.rates ?? sampleRateBook()),
     publishedAt: overrides.status === 'published' ? new Date() : null,
   });

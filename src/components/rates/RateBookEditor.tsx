@@ -1,33 +1,28 @@
 import '~/lib/shared/zod-in-browser';
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { asRequestFailed } from '~/components/inquiries/page/api';
-import { loadRates, startDraft, type RateDraft, type RatesOverview } from './draft-api';
+import { startDraft, type RateDraft, type RatesOverview } from './draft-api';
 import { DraftForm } from './DraftForm';
 
 type Props = {
-  /** The firm's versions and draft as the page found them; loaded here when the page passes none. */
-  initial: RatesOverview | null;
+  /** The firm's versions and draft as the page found them. */
+  initial: RatesOverview;
   /** The firm's clock, for when a draft was saved. */
   timeZone: string;
 };
 
 /** Editing the firm's Rate book draft (`/app/rates/edit`); without a draft, starting one from the published version. */
 export function RateBookEditor({ initial, timeZone }: Props) {
-  const [overview, setOverview] = useState<RatesOverview | null>(initial);
+  const [overview, setOverview] = useState<RatesOverview>(initial);
   const [failure, setFailure] = useState<string | null>(null);
   const [starting, setStarting] = useState(false);
-
-  useEffect(() => {
-    if (initial) return;
-    loadRates().then(setOverview, (error: unknown) => setFailure(asRequestFailed(error).message));
-  }, [initial]);
 
   const start = async () => {
     setStarting(true);
     setFailure(null);
     try {
       const draft: RateDraft = await startDraft();
-      setOverview((o) => (o ? { ...o, draft } : { published: null, versions: [], draft }));
+      setOverview((o) => ({ ...o, draft }));
     } catch (error) {
       setFailure(asRequestFailed(error).message);
     } finally {
@@ -35,13 +30,6 @@ export function RateBookEditor({ initial, timeZone }: Props) {
     }
   };
 
-  if (failure && !overview?.draft)
-    return (
-      <p role="alert" className="mt-4 text-brick">
-        {failure}
-      </p>
-    );
-  if (!overview) return <p className="mt-4 text-slate">Loading the draft…</p>;
   if (!overview.draft)
     return (
       <div className="mt-4 max-w-prose space-y-3">
@@ -49,11 +37,16 @@ export function RateBookEditor({ initial, timeZone }: Props) {
           There is no draft yet.{' '}
           {overview.published
             ? `A draft starts as a copy of version ${overview.published.number}, the one pricing estimates now; estimates keep using that until you publish the draft.`
-            : 'A draft starts from your current numbers.'}
+            : 'With no published version yet, a draft starts from example numbers for you to make your own.'}
         </p>
         <button type="button" className="button-primary" onClick={start} disabled={starting}>
           {starting ? 'Starting…' : 'Start a draft'}
         </button>
+        {failure && (
+          <p role="alert" className="text-brick">
+            {failure}
+          </p>
+        )}
       </div>
     );
   const { draft } = overview;

@@ -29,8 +29,8 @@ export type RateDraft = {
 
 export type RatesOverview = { published: RateVersionSummary | null; draft: RateDraft | null; versions: RateVersionSummary[] };
 
-/** One field that differs between the draft as stored and the one being saved (values as stored). */
-export type DraftChange = { path: string; label: string; mine: unknown; theirs: unknown };
+/** One field that differs between the draft as stored and the one being saved (values as stored; the label comes from the field catalogue when the server gives none). */
+export type DraftChange = { path: string; label?: string; mine: unknown; theirs: unknown };
 
 export class DraftConflict extends RequestFailed {
   constructor(
@@ -43,10 +43,7 @@ export class DraftConflict extends RequestFailed {
   }
 }
 
-export const RATES_URL = '/api/app/rates';
 export const DRAFT_URL = '/api/app/rates/draft';
-
-export const loadRates = () => callJson<RatesOverview>('GET', RATES_URL);
 
 /** The firm's draft: a copy of the published version, or the draft that already exists. */
 export const startDraft = () => callJson<RateDraft>('POST', DRAFT_URL, {});

@@ -12,6 +12,15 @@ export type Staff = Viewer & {
 /** A policy about the viewer alone (`canManageTeam`, `canUseSetup`, …), for the guard's `may`. */
 export type ViewerPolicy = (viewer: Viewer) => boolean;
 
+export type StaffGuardOptions = {
+  may?: ViewerPolicy;
+  /**
+   * Answer a refused role as if the page or route did not exist (404), for the owner's own areas
+   * (Rate book, Setup, Reports): a salesperson is not told that they are there.
+   */
+  hidden?: boolean;
+};
+
 /**
  * The one guard of the staff area. Throws Unauthenticated when no one is signed in to a firm and
  * Forbidden when the policy `may` refuses the person as they are in the active firm.
@@ -20,7 +29,7 @@ export type ViewerPolicy = (viewer: Viewer) => boolean;
  *
  *   const staff = requireStaff(Astro.locals, { may: canManageTeam });
  */
-export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy } = {}): Staff {
+export function requireStaff(locals: App.Locals, options: StaffGuardOptions = {}): Staff {
   const { user, membership, session } = locals;
   if (!user || !membership || !session) throw new Unauthenticated();
   const staff: Staff = {
@@ -31,7 +40,7 @@ export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy }
     role: membership.role,
     sessionToken: session.token,
   };
-  if (options.may && !options.may(staff)) throw new Forbidden();
+  if (options.may && !options.may(staff)) throw options.hidden ? new NotFound() : new Forbidden();
   return staff;
 }
 

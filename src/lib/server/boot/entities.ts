@@ -20,6 +20,7 @@ import { Invite } from '../team/invite.entity';
 import { RateLimitEntry } from '../db/rate-limit-entry.entity';
 import { Availability } from '../visits/availability.entity';
 import { Visit } from '../visits/visit.entity';
+import { RateBookReplay } from '../rate-preview/rate-book-replay.entity';
 
 export const entities = [
   Company,
@@ -43,4 +44,5 @@ export const entities = [
   InquiryDigest,
   Availability,
   Visit,
+  RateBookReplay,
 ];

@@ -7,6 +7,7 @@ import { purgeDeletedLeadsJob } from '../intake/purge-deleted-leads';
 import { morningDigestJob } from '../intake/morning-digest';
 import { overdueTriageJob } from '../leads/triage-refresh';
 import { visitRemindersJob } from '../visits/visit-reminders';
+import { rateBookReplayJob } from '../rate-preview/draft-preview';
 
 // Each job has its own data type; the list holds them all.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -18,4 +19,5 @@ export const backgroundJobs: readonly JobDefinition<any>[] = [
   morningDigestJob,
   overdueTriageJob,
   visitRemindersJob,
+  rateBookReplayJob,
 ];
