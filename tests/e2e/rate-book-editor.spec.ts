@@ -1,3 +1,4 @@
+import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
 import { DEMO_PASSWORD, signedInAs } from './helpers/staff';
 
@@ -82,6 +83,9 @@ test('the owner gets field messages for a negative price and a 10,000 % markup, 
   await expect(price).toHaveAccessibleDescription(/Sheet price cannot be negative\./);
   await expect(markup).toHaveAccessibleDescription(/Material markup must be at most 300 %\./);
   await expect(page.getByRole('list', { name: 'Fields that need a look' })).toContainText('Sheet 1 · Sheet price');
+  // Source: WCAG 2.2 level A and AA success criteria, as axe-core checks them.
+  const axe = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze();
+  expect(axe.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
 
   // Fixed, and saved: stored as cents and a fraction.
   await price.fill('35.50');

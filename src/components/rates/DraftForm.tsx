@@ -122,7 +122,10 @@ export function DraftForm({ draft, timeZone }: Props) {
             <ul aria-label="Fields that need a look" className="max-h-40 overflow-y-auto text-sm">
               {problems.map((p) => (
                 <li key={p.path}>
-                  <a href={`#${inputIdOf(pathOfProblem(p.path))}`}>{p.where}</a>: <span className="text-brick">{p.message}</span>
+                  <a className="underline" href={`#${inputIdOf(pathOfProblem(p.path))}`}>
+                    {p.where}
+                  </a>
+                  : <span className="text-brick">{p.message}</span>
                 </li>
               ))}
             </ul>
@@ -147,7 +150,7 @@ function Group({ id, title, help, currency }: { id: GroupId; title: string; help
           <div className="mt-2 grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
             {section.entries.map((entry) => {
               const list = listAt(entry);
-              if (list) return <RateList key={entry} list={list} name={entry} currency={currency} />;
+              if (list) return <RateList key={entry} list={list} name={entry} currency={currency} heading={section.entries.length > 1} />;
               const field = fieldAt(entry)!;
               return <RateField key={entry} field={field} name={entry} currency={currency} />;
             })}

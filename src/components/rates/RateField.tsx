@@ -13,7 +13,10 @@ export const inputIdOf = (name: string) => `rate-${name.replace(/[^a-zA-Z0-9-]/g
 
 const NUMBER_KINDS = new Set(['money', 'percent', 'hours', 'inches', 'count', 'number']);
 
-/** One field of the Rate book: its label, the input its kind needs, its unit, its help line or message. */
+/**
+ * One field of the Rate book: its label, the input its kind needs, its unit, its help line or message.
+ * Inputs keep a scroll margin the height of the sticky Save bar, so a focused field is never under it.
+ */
 export function RateField({ field, name, currency }: Props) {
   const { register } = useFormContext();
   const { errors } = useFormState({ name });
@@ -26,7 +29,7 @@ export function RateField({ field, name, currency }: Props) {
   if (field.kind === 'flag') {
     return (
       <div className="flex items-start gap-2 sm:col-span-2">
-        <input id={id} type="checkbox" className="mt-1" {...register(name)} {...aria} />
+        <input id={id} type="checkbox" className="mt-1 scroll-mb-48" {...register(name)} {...aria} />
         <div>
           <label htmlFor={id}>{field.label}</label>
           <FieldNotes id={id} help={field.help} message={message} />
@@ -43,14 +46,14 @@ export function RateField({ field, name, currency }: Props) {
         type="number"
         step="any"
         inputMode={field.kind === 'count' ? 'numeric' : 'decimal'}
-        className="field-input figures max-w-36"
+        className="field-input figures max-w-36 scroll-mb-48"
         {...register(name, { valueAsNumber: true })}
         {...aria}
       />
     );
   } else if (field.kind === 'choice') {
     input = (
-      <select id={id} className="field-input max-w-xs" {...register(name)} {...aria}>
+      <select id={id} className="field-input max-w-xs scroll-mb-48" {...register(name)} {...aria}>
         {field.optional && <option value="">Not set (the usual)</option>}
         {field.options!.map((o) => (
           <option key={o.value} value={o.value}>
@@ -62,7 +65,7 @@ export function RateField({ field, name, currency }: Props) {
   } else if (field.kind === 'reference') {
     input = <ReferenceSelect id={id} name={name} field={field} aria={aria} />;
   } else {
-    input = <input id={id} type="text" className="field-input max-w-xs" autoComplete="off" {...register(name)} {...aria} />;
+    input = <input id={id} type="text" className="field-input max-w-xs scroll-mb-48" autoComplete="off" {...register(name)} {...aria} />;
   }
 
   return (
@@ -117,7 +120,7 @@ function ReferenceSelect({ id, name, field, aria }: { id: string; name: string; 
   const current = useWatch({ name }) as string | undefined;
   const known = new Set(rowsByList.flatMap((rows) => (rows ?? []).map((r) => r.id)));
   return (
-    <select id={id} className="field-input max-w-xs" {...register(name)} {...aria}>
+    <select id={id} className="field-input max-w-xs scroll-mb-48" {...register(name)} {...aria}>
       <option value="">{field.optional ? 'None' : 'Choose…'}</option>
       {current && !known.has(current) && <option value={current}>{current} (not in the lists)</option>}
       {lists.map((list, i) => (

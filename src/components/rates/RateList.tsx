@@ -5,7 +5,13 @@ import { appliesToTreatment, rowFields, rowLists, TREATMENT_KIND_OPTIONS, type L
 import { inputIdOf, RateField } from './RateField';
 import { newRow, newTreatment } from './new-rows';
 
-type Props = { list: ListDescriptor; name: string; currency: string };
+type Props = {
+  list: ListDescriptor;
+  name: string;
+  currency: string;
+  /** Off when the list is its section's only entry, whose title already names it. */
+  heading?: boolean;
+};
 
 const TREATMENTS = 'catalogue.treatments';
 /** `catalogue.treatments.2` + `catalogue.treatments.*.source.sheetId` → `catalogue.treatments.2.source.sheetId`. */
@@ -13,7 +19,7 @@ const inRow = (rowName: string, list: ListDescriptor, pattern: string) => `${row
 const capitalised = (words: string) => words.charAt(0).toUpperCase() + words.slice(1);
 
 /** A list of the Rate book (sheets, finishes, trip zones, containers …): its rows, and Add and Remove. */
-export function RateList({ list, name, currency }: Props) {
+export function RateList({ list, name, currency, heading = true }: Props) {
   const { control } = useFormContext();
   const { fields, append, remove } = useFieldArray({ control, name });
   const { errors } = useFormState({ name });
@@ -22,7 +28,7 @@ export function RateList({ list, name, currency }: Props) {
 
   return (
     <div id={inputIdOf(name)} className="sm:col-span-2 lg:col-span-3" tabIndex={-1}>
-      <h4 className="text-sm font-bold">{list.label}</h4>
+      {heading && <h4 className="text-sm font-bold">{list.label}</h4>}
       <p className="text-xs text-slate">{list.help}</p>
       {listError?.message && <p className="field-error">{listError.message}</p>}
       {fields.length > 0 && (
