@@ -37,6 +37,7 @@ const MATRIX: Row[] = [
   { route: '/app/leads/[id]', method: 'GET', path: (ids) => `/app/leads/${ids.lead}`, expect: { signedOut: 302, sales: 200, other: 404, owner: 200 } },
   { route: '/app/visits', method: 'GET', path: () => '/app/visits', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/app/rates', method: 'GET', path: () => '/app/rates', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  { route: '/app/rates/edit', method: 'GET', path: () => '/app/rates/edit', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
   { route: '/app/setup', method: 'GET', path: () => '/app/setup', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
   { route: '/app/setup/team', method: 'GET', path: () => '/app/setup/team', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
   {
