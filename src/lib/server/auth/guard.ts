@@ -13,14 +13,22 @@ export type Staff = Viewer & {
 export type ViewerPolicy = (viewer: Viewer) => boolean;
 
 /**
+ * How a refusal by `may` is answered: `forbidden` (403, the "not allowed" page) by default, or
+ * `not-found` (404) for a part of the staff area whose very existence is the owner's business
+ * (Setup): a salesperson poking at its addresses learns nothing about what is there.
+ */
+export type Refusal = 'forbidden' | 'not-found';
+
+/**
  * The one guard of the staff area. Throws Unauthenticated when no one is signed in to a firm and
- * Forbidden when the policy `may` refuses the person as they are in the active firm.
+ * Forbidden (or NotFound, with `refuse: 'not-found'`) when the policy `may` refuses the person as
+ * they are in the active firm.
  * (Pages: the staff-area middleware turns these into a sign-in redirect or the "not allowed" page.
  * API routes: `staffEndpoint` turns them into 401/403 JSON.)
  *
  *   const staff = requireStaff(Astro.locals, { may: canManageTeam });
  */
-export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy } = {}): Staff {
+export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy; refuse?: Refusal } = {}): Staff {
   const { user, membership, session } = locals;
   if (!user || !membership || !session) throw new Unauthenticated();
   const staff: Staff = {
@@ -31,7 +39,7 @@ export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy }
     role: membership.role,
     sessionToken: session.token,
   };
-  if (options.may && !options.may(staff)) throw new Forbidden();
+  if (options.may && !options.may(staff)) throw options.refuse === 'not-found' ? new NotFound() : new Forbidden();
   return staff;
 }
 
