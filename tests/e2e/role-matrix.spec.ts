@@ -38,21 +38,21 @@ const MATRIX: Row[] = [
   { route: '/app/visits', method: 'GET', path: () => '/app/visits', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/app/rates', method: 'GET', path: () => '/app/rates', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
   { route: '/app/rates/edit', method: 'GET', path: () => '/app/rates/edit', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
-  { route: '/app/setup', method: 'GET', path: () => '/app/setup', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
-  { route: '/app/setup/team', method: 'GET', path: () => '/app/setup/team', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  { route: '/app/setup', method: 'GET', path: () => '/app/setup', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  { route: '/app/setup/team', method: 'GET', path: () => '/app/setup/team', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
   {
     route: '/app/setup/team',
     method: 'POST',
     path: () => '/app/setup/team',
     // Sets Sam's role to what it already is: allowed callers change nothing.
     form: (ids) => ({ intent: 'role', id: ids.samMember, role: 'sales' }),
-    expect: { signedOut: 302, sales: 403, other: 404, owner: 303 },
+    expect: { signedOut: 302, sales: 404, other: 404, owner: 303 },
   },
   {
     route: '/app/setup/lost-reasons',
     method: 'GET',
     path: () => '/app/setup/lost-reasons',
-    expect: { signedOut: 302, sales: 403, other: 200, owner: 200 },
+    expect: { signedOut: 302, sales: 404, other: 200, owner: 200 },
   },
   { route: '/app/account', method: 'GET', path: () => '/app/account', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/api/app/me', method: 'GET', path: () => '/api/app/me', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
@@ -70,41 +70,41 @@ const MATRIX: Row[] = [
     },
     expect: { signedOut: 401, sales: 200, other: 200, owner: 200 },
   },
-  { route: '/api/app/team', method: 'GET', path: () => '/api/app/team', expect: { signedOut: 401, sales: 403, other: 200, owner: 200 } },
+  { route: '/api/app/team', method: 'GET', path: () => '/api/app/team', expect: { signedOut: 401, sales: 404, other: 200, owner: 200 } },
   {
     route: '/api/app/team/invites',
     method: 'POST',
     path: () => '/api/app/team/invites',
     json: { email: 'matrix-newcomer@firm.test', role: 'sales' },
     // The other firm's owner invites to their own firm: allowed, and it touches nothing of the first firm.
-    expect: { signedOut: 401, sales: 403, other: 201, owner: 201 },
+    expect: { signedOut: 401, sales: 404, other: 201, owner: 201 },
   },
   {
     route: '/api/app/team/invites/[id]',
     method: 'DELETE',
     path: (ids) => `/api/app/team/invites/${ids.invite}`,
-    expect: { signedOut: 401, sales: 403, other: 404, owner: 204 },
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 204 },
   },
   {
     route: '/api/app/team/members/[id]',
     method: 'PATCH',
     path: (ids) => `/api/app/team/members/${ids.samMember}`,
     json: { role: 'sales' },
-    expect: { signedOut: 401, sales: 403, other: 404, owner: 200 },
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 200 },
   },
   {
     route: '/api/app/team/members/[id]',
     method: 'DELETE',
     // Olive is the only owner: the owner's own call is refused as "last owner" (409), never done.
     path: (ids) => `/api/app/team/members/${ids.oliveMember}`,
-    expect: { signedOut: 401, sales: 403, other: 404, owner: 409 },
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 409 },
   },
   // Working an inquiry (notes, calls, e-mail, photos) and the firm's e-mail templates.
   {
     route: '/app/setup/mail-templates',
     method: 'GET',
     path: () => '/app/setup/mail-templates',
-    expect: { signedOut: 302, sales: 403, other: 200, owner: 200 },
+    expect: { signedOut: 302, sales: 404, other: 200, owner: 200 },
   },
   {
     route: '/api/app/leads/[id]/notes',
@@ -141,20 +141,20 @@ const MATRIX: Row[] = [
     path: () => '/api/app/mail-templates',
     json: { name: 'Matrix check', subject: 'Hello {name}', body: 'Checked by the role matrix.' },
     // The other firm's owner adds to their own firm.
-    expect: { signedOut: 401, sales: 403, other: 201, owner: 201 },
+    expect: { signedOut: 401, sales: 404, other: 201, owner: 201 },
   },
   {
     route: '/api/app/mail-templates/[id]',
     method: 'PATCH',
     path: (ids) => `/api/app/mail-templates/${ids.template}`,
     json: { name: 'Matrix target', subject: 'Hello {name}', body: 'Checked by the role matrix.' },
-    expect: { signedOut: 401, sales: 403, other: 404, owner: 200 },
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 200 },
   },
   {
     route: '/api/app/mail-templates/[id]',
     method: 'DELETE',
     path: (ids) => `/api/app/mail-templates/${ids.template}`,
-    expect: { signedOut: 401, sales: 403, other: 404, owner: 204 },
+    expect: { signedOut: 401, sales: 404, other: 404, owner: 204 },
   },
   // The inquiry page's workflow routes. Bodies that reach the rules are refused (400/409), so no
   // caller changes the demo inquiry; another firm's owner gets 404 before the body is read.
@@ -204,7 +204,7 @@ const MATRIX: Row[] = [
     method: 'PUT',
     path: () => '/api/app/settings/lost-reasons',
     json: { reasons: [...DEFAULT_LOST_REASONS] },
-    expect: { signedOut: 401, sales: 403, other: 200, owner: 200 },
+    expect: { signedOut: 401, sales: 404, other: 200, owner: 200 },
   },
   { route: '/app/leads/new', method: 'GET', path: () => '/app/leads/new', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/app/leads/deleted', method: 'GET', path: () => '/app/leads/deleted', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
@@ -299,7 +299,7 @@ const MATRIX: Row[] = [
   // The Visits calendar, hours and settings. Bodies are refused (400) or the caller is (403/404),
   // so nobody's hours or the firm's settings change.
   { route: '/app/visits/hours', method: 'GET', path: () => '/app/visits/hours', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
-  { route: '/app/setup/visits', method: 'GET', path: () => '/app/setup/visits', expect: { signedOut: 302, sales: 403, other: 200, owner: 200 } },
+  { route: '/app/setup/visits', method: 'GET', path: () => '/app/setup/visits', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
   {
     route: '/api/app/visits',
     method: 'GET',
@@ -325,7 +325,7 @@ const MATRIX: Row[] = [
     method: 'PUT',
     path: () => '/api/app/settings/visits',
     json: { visitMinutes: 60, bufferMinutes: 30, stepMinutes: 30, minNoticeMinutes: 1440, horizonDays: 28, onlineBooking: false, timeZone: 'Nowhere/Atall' },
-    expect: { signedOut: 401, sales: 403, other: 400, owner: 400 },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
   },
   // The Rate book: owners only, and hidden from sales (404, as if the pages did not exist). Opening
   // the draft that the demo firm already has changes nothing; saves and publishes with revision 0 are

@@ -22,6 +22,14 @@ export const PAGES = {
   inquiries: () => import('../../src/pages/app/index.astro'),
   lead: () => import('../../src/pages/app/leads/[id].astro'),
   team: () => import('../../src/pages/app/setup/team.astro'),
+  setup: () => import('../../src/pages/app/setup/index.astro'),
+  setupProfile: () => import('../../src/pages/app/setup/profile.astro'),
+  setupServiceArea: () => import('../../src/pages/app/setup/service-area.astro'),
+  setupNotifications: () => import('../../src/pages/app/setup/notifications.astro'),
+  setupWidget: () => import('../../src/pages/app/setup/widget.astro'),
+  setupVisits: () => import('../../src/pages/app/setup/visits.astro'),
+  setupLostReasons: () => import('../../src/pages/app/setup/lost-reasons.astro'),
+  setupMailTemplates: () => import('../../src/pages/app/setup/mail-templates.astro'),
 };
 
 export async function renderStaffPage(

@@ -159,7 +159,7 @@ const goodSettings = {
 };
 
 describe('the firm’s visit settings', () => {
-  test('the owner saves them with the time zone; sales may not (403)', async () => {
+  test('the owner saves them with the time zone; sales get 404 (Setup is the owner’s)', async () => {
     const f = await firm();
     const saved = await settings(f.owner, goodSettings);
     expect(saved.status).toBe(200);
@@ -169,7 +169,7 @@ describe('the firm’s visit settings', () => {
       90, 15, 15, 120, 21,
     ]);
     expect([company.onlineBooking, company.timeZone]).toEqual([true, 'Europe/London']);
-    expect((await settings(f.sid, goodSettings)).status).toBe(403);
+    expect((await settings(f.sid, goodSettings)).status).toBe(404);
   });
 
   test('an unknown time zone and out-of-range minutes are a 400 naming the fields, and nothing changes', async () => {

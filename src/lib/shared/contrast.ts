@@ -44,3 +44,21 @@ export function textOn(background: string): typeof WHITE | typeof INK {
   if (!channels(background)) return INK;
   return contrastRatio(WHITE, background) >= contrastRatio(INK, background) ? WHITE : INK;
 }
+
+/**
+ * Least contrast for normal text at level AA. Source: W3C, WCAG 2.2, Success Criterion 1.4.3
+ * Contrast (Minimum), https://www.w3.org/TR/WCAG22/#contrast-minimum; docs/sources.md §17.
+ */
+export const AA_TEXT_CONTRAST = 4.5;
+
+/** The text colour the widget would put on `background` and the contrast it reaches; null for a malformed colour. */
+export function brandTextContrast(background: string): { text: typeof WHITE | typeof INK; ratio: number } | null {
+  if (!channels(background)) return null;
+  const text = textOn(background);
+  return { text, ratio: contrastRatio(text, background) };
+}
+
+/** A ratio as people read it: 4.48 → "4.4:1" (rounded down, so a colour just short of 4.5 never reads as 4.5). */
+export function formatRatio(ratio: number): string {
+  return `${(Math.floor(ratio * 10) / 10).toFixed(1)}:1`;
+}

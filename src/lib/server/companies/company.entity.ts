@@ -43,6 +43,33 @@ export class Company extends BaseEntity {
   @Property({ type: 'string', length: 254, nullable: true })
   contactEmail: string | null = null;
 
+  // The office's postal address (Setup → Firm profile). Its postcode is also the centre of a
+  // service area given as a radius.
+
+  @Property({ type: 'string', length: 200, nullable: true })
+  addressStreet: string | null = null;
+
+  @Property({ type: 'string', length: 100, nullable: true })
+  addressCity: string | null = null;
+
+  /** State, province or county. */
+  @Property({ type: 'string', length: 60, nullable: true })
+  addressRegion: string | null = null;
+
+  @Property({ type: 'string', length: 12, nullable: true })
+  addressPostcode: string | null = null;
+
+  /** Storage key of the firm's logo (`logos/<companyId>/<uuid>.png`, re-encoded by us), or none. */
+  @Property({ type: 'string', length: 200, nullable: true })
+  logoKey: string | null = null;
+
+  /**
+   * The service area as a radius in miles around the office's postcode; null means the area is the
+   * postcode list (`servicePostcodes`) instead.
+   */
+  @Property({ type: 'smallint', nullable: true })
+  serviceRadiusMiles: number | null = null;
+
   /** The firm's own website, shown in e-mails. */
   @Property({ type: 'string', length: 200, nullable: true })
   website: string | null = null;

@@ -11,7 +11,7 @@ export const GET = staffEndpoint({ may: canSeeLeads }, async ({ staff, locals })
 );
 
 /** Adds a template. Owner only. */
-export const POST = staffEndpoint({ may: canUseSetup }, async ({ staff, locals, request }) => {
+export const POST = staffEndpoint({ may: canUseSetup, hidden: true }, async ({ staff, locals, request }) => {
   const input = await readJson(request, mailTemplateSchema);
   return Response.json(presentTemplate(await createTemplate(locals.em, staff.companyId, input)), { status: 201 });
 });

@@ -11,7 +11,7 @@ export const GET = staffEndpoint({ may: canSeeLeads }, async ({ staff, locals })
 });
 
 /** Replaces the list. Owner only (Setup). */
-export const PUT = staffEndpoint({ may: canUseSetup }, async ({ staff, locals, request }) => {
+export const PUT = staffEndpoint({ may: canUseSetup, hidden: true }, async ({ staff, locals, request }) => {
   const { reasons } = await readJson(request, lostReasonsSchema);
   return Response.json({ reasons: await saveLostReasons(locals.em, staff.companyId, reasons) });
 });

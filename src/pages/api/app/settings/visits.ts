@@ -5,7 +5,7 @@ import { saveVisitSettings } from '~/lib/server/visits/visit-settings';
 import { firmVisitSettingsSchema } from '~/lib/shared/visit-calendar';
 
 /** Replaces the firm's visit settings and time zone. Owner only (Setup → Visits). */
-export const PUT = staffEndpoint({ may: canEditVisitSettings }, async ({ staff, locals, request }) => {
+export const PUT = staffEndpoint({ may: canEditVisitSettings, hidden: true }, async ({ staff, locals, request }) => {
   const input = await readJson(request, firmVisitSettingsSchema);
   return Response.json(await saveVisitSettings(locals.em, staff.companyId, input));
 });

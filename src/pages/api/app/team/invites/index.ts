@@ -6,7 +6,7 @@ import { inviteToTeam } from '~/lib/server/team/team.service';
 import { inviteSchema } from '~/lib/shared/auth-schemas';
 
 /** Invites a person by e-mail with a role. Owner only. */
-export const POST = staffEndpoint({ may: canManageTeam }, async ({ staff, locals, request }) => {
+export const POST = staffEndpoint({ may: canManageTeam, hidden: true }, async ({ staff, locals, request }) => {
   const input = await readJson(request, inviteSchema);
   const invite = await inviteToTeam(locals.em, { companyId: staff.companyId, invitedById: staff.user.id, ...input });
   kickMailDelivery();

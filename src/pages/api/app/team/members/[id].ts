@@ -7,7 +7,7 @@ import { changeRole, removeMember } from '~/lib/server/team/team.service';
 import { changeRoleSchema } from '~/lib/shared/auth-schemas';
 
 /** Changes a member's role. Owner only. */
-export const PATCH = staffEndpoint({ may: canManageTeam }, async ({ staff, locals, params, request }) => {
+export const PATCH = staffEndpoint({ may: canManageTeam, hidden: true }, async ({ staff, locals, params, request }) => {
   if (!isId(params.id)) throw new NotFound();
   const { role } = await readJson(request, changeRoleSchema);
   const member = await changeRole(locals.em, { companyId: staff.companyId, membershipId: params.id, role, actingSessionToken: staff.sessionToken });
@@ -15,7 +15,7 @@ export const PATCH = staffEndpoint({ may: canManageTeam }, async ({ staff, local
 });
 
 /** Removes a member from the active firm. Owner only. */
-export const DELETE = staffEndpoint({ may: canManageTeam }, async ({ staff, locals, params }) => {
+export const DELETE = staffEndpoint({ may: canManageTeam, hidden: true }, async ({ staff, locals, params }) => {
   if (!isId(params.id)) throw new NotFound();
   await removeMember(locals.em, { companyId: staff.companyId, membershipId: params.id });
   return new Response(null, { status: 204 });
