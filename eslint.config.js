@@ -20,7 +20,7 @@ const BELOW_DOMAINS = [...FOUNDATION, 'db', 'rate-limit'];
 const DOMAINS_BELOW_AUTH = [...BELOW_DOMAINS, 'companies', 'jobs', 'users', 'mail', 'storage', 'rates'];
 const BELOW_VISITS = [...DOMAINS_BELOW_AUTH, 'auth', 'estimates', 'leads', 'team'];
 const BELOW_PHOTOS = [...BELOW_VISITS, 'visits'];
-const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake'];
+const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake', 'reports'];
 
 /** @type {[unit: string, mayImport: string[]][]} */
 const SERVER_LAYERS = [
@@ -58,6 +58,8 @@ const SERVER_LAYERS = [
   ['embed', [...BELOW_PHOTOS, 'photos']],
   // Inquiries coming in and kept tidy: staff-entered inquiries, merging, purging deleted ones, the morning digest.
   ['intake', [...BELOW_PHOTOS, 'photos']],
+  // The owner's Reports: read-only figures over leads, visits and the widget's funnel.
+  ['reports', [...BELOW_PHOTOS, 'photos', 'embed', 'intake']],
   // Middleware pieces (glue for src/middleware.ts).
   ['request-log', BELOW_BOOT],
   ['failures', BELOW_BOOT],

@@ -13,14 +13,21 @@ export type Staff = Viewer & {
 export type ViewerPolicy = (viewer: Viewer) => boolean;
 
 /**
+ * What the guard checks besides a signed-in person: `may`, a policy about them in the active firm;
+ * `hidden`, answer a refusal by `may` as not found (404) rather than not allowed (403), for areas
+ * whose very existence a role should not see (the owner's Reports).
+ */
+export type GuardOptions = { may?: ViewerPolicy; hidden?: boolean };
+
+/**
  * The one guard of the staff area. Throws Unauthenticated when no one is signed in to a firm and
- * Forbidden when the policy `may` refuses the person as they are in the active firm.
+ * Forbidden (NotFound with `hidden`) when the policy `may` refuses the person as they are in the active firm.
  * (Pages: the staff-area middleware turns these into a sign-in redirect or the "not allowed" page.
  * API routes: `staffEndpoint` turns them into 401/403 JSON.)
  *
  *   const staff = requireStaff(Astro.locals, { may: canManageTeam });
  */
-export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy } = {}): Staff {
+export function requireStaff(locals: App.Locals, options: GuardOptions = {}): Staff {
   const { user, membership, session } = locals;
   if (!user || !membership || !session) throw new Unauthenticated();
   const staff: Staff = {
@@ -31,7 +38,7 @@ export function requireStaff(locals: App.Locals, options: { may?: ViewerPolicy }
     role: membership.role,
     sessionToken: session.token,
   };
-  if (options.may && !options.may(staff)) throw new Forbidden();
+  if (options.may && !options.may(staff)) throw options.hidden ? new NotFound() : new Forbidden();
   return staff;
 }
 

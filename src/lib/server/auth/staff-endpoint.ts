@@ -1,6 +1,6 @@
 import type { APIContext, APIRoute } from 'astro';
 import { errorResponse } from '../errors';
-import { requireStaff, type Staff, type ViewerPolicy } from './guard';
+import { requireStaff, type GuardOptions, type Staff } from './guard';
 
 /**
  * Wraps a staff API route: runs the guard (with an optional policy), then the handler, and maps
@@ -8,7 +8,7 @@ import { requireStaff, type Staff, type ViewerPolicy } from './guard';
  *
  *   export const GET = staffEndpoint({ may: canManageTeam }, ({ staff, locals }) => ...);
  */
-export function staffEndpoint(options: { may?: ViewerPolicy }, handler: (context: APIContext & { staff: Staff }) => Promise<Response> | Response): APIRoute {
+export function staffEndpoint(options: GuardOptions, handler: (context: APIContext & { staff: Staff }) => Promise<Response> | Response): APIRoute {
   return async (context) => {
     try {
       const staff = requireStaff(context.locals, options);
