@@ -20,7 +20,7 @@ const BELOW_DOMAINS = [...FOUNDATION, 'db', 'rate-limit'];
 const DOMAINS_BELOW_AUTH = [...BELOW_DOMAINS, 'companies', 'jobs', 'users', 'mail', 'storage', 'rates'];
 const BELOW_VISITS = [...DOMAINS_BELOW_AUTH, 'auth', 'estimates', 'leads', 'team'];
 const BELOW_PHOTOS = [...BELOW_VISITS, 'visits'];
-const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake', 'rate-preview'];
+const BELOW_BOOT = [...BELOW_PHOTOS, 'photos', 'embed', 'intake', 'rate-preview', 'reports'];
 
 /** @type {[unit: string, mayImport: string[]][]} */
 const SERVER_LAYERS = [
@@ -60,6 +60,8 @@ const SERVER_LAYERS = [
   ['intake', [...BELOW_PHOTOS, 'photos']],
   // What a Rate book draft would do: sample rooms and recent inquiries priced with it beside the published version.
   ['rate-preview', BELOW_PHOTOS],
+  // The owner's Reports: read-only figures over leads, visits and the widget's funnel.
+  ['reports', [...BELOW_PHOTOS, 'photos', 'embed', 'intake']],
   // Middleware pieces (glue for src/middleware.ts).
   ['request-log', BELOW_BOOT],
   ['failures', BELOW_BOOT],

@@ -54,6 +54,14 @@ const MATRIX: Row[] = [
     path: () => '/app/setup/lost-reasons',
     expect: { signedOut: 302, sales: 404, other: 200, owner: 200 },
   },
+  // Reports are the owner's; sales staff are not told they exist (404). The other firm's owner sees their own firm's figures.
+  { route: '/app/reports', method: 'GET', path: () => '/app/reports', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  {
+    route: '/api/app/reports/[report].csv',
+    method: 'GET',
+    path: () => '/api/app/reports/funnel.csv',
+    expect: { signedOut: 401, sales: 404, other: 200, owner: 200 },
+  },
   { route: '/app/account', method: 'GET', path: () => '/app/account', expect: { signedOut: 302, sales: 200, other: 200, owner: 200 } },
   { route: '/api/app/me', method: 'GET', path: () => '/api/app/me', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },
   { route: '/api/app/leads', method: 'GET', path: () => '/api/app/leads?sort=name', expect: { signedOut: 401, sales: 200, other: 200, owner: 200 } },

@@ -4,6 +4,7 @@ import * as companyPolicies from '~/lib/server/companies/policy';
 import * as leadPolicies from '~/lib/server/leads/policy';
 import { leadActions } from '~/lib/server/leads/present-lead-actions';
 import * as ratePolicies from '~/lib/server/rates/policy';
+import * as reportPolicies from '~/lib/server/reports/policy';
 import * as teamPolicies from '~/lib/server/team/policy';
 import * as visitPolicies from '~/lib/server/visits/policy';
 import type { FirmScoped, Viewer } from '~/lib/server/viewer';
@@ -12,6 +13,7 @@ const POLICIES: Record<string, (viewer: Viewer, target: FirmScoped) => boolean> 
   ...companyPolicies,
   ...leadPolicies,
   ...ratePolicies,
+  ...reportPolicies,
   ...teamPolicies,
   ...visitPolicies,
 };
@@ -33,6 +35,8 @@ const SAME_FIRM: Record<string, Record<StaffRole, boolean>> = {
   canPublishRates: { owner: true, sales: false },
   canManageTeam: { owner: true, sales: false },
   canUseSetup: { owner: true, sales: false },
+  // The firm's figures are the owner's, as the Rate book's margins are.
+  canSeeReports: { owner: true, sales: false },
   canSeeVisits: { owner: true, sales: true },
   canManageVisit: { owner: true, sales: true },
   canEditVisitSettings: { owner: true, sales: false },
@@ -59,7 +63,7 @@ describe('permission policies', () => {
   });
 
   test('a policy about the firm itself, asked without an object, means the viewer’s active firm', () => {
-    for (const name of ['canSeeLeads', 'canEnterLead', 'canSeeRates', 'canEditRates', 'canPublishRates', 'canManageTeam', 'canUseSetup']) {
+    for (const name of ['canSeeLeads', 'canEnterLead', 'canSeeReports', 'canSeeRates', 'canEditRates', 'canPublishRates', 'canManageTeam', 'canUseSetup']) {
       const policy = POLICIES[name] as (viewer: Viewer) => boolean;
       for (const role of STAFF_ROLES) expect(`${name} ${role}: ${policy(viewer(role))}`).toBe(`${name} ${role}: ${SAME_FIRM[name]![role]}`);
     }

@@ -23,7 +23,7 @@ export type StaffGuardOptions = {
 
 /**
  * The one guard of the staff area. Throws Unauthenticated when no one is signed in to a firm and
- * Forbidden when the policy `may` refuses the person as they are in the active firm.
+ * Forbidden (NotFound with `hidden`) when the policy `may` refuses the person as they are in the active firm.
  * (Pages: the staff-area middleware turns these into a sign-in redirect or the "not allowed" page.
  * API routes: `staffEndpoint` turns them into 401/403 JSON.)
  *

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { responseDueAt } from './response-due';
+import { responseDueAt, workingMinutesBetween } from './response-due';
 
 // Source: the IANA time zone database (tzdata) as the runtime's Intl API applies it, through
 // @date-fns/tz. Rules used below: the US changes to daylight time on the second Sunday of March
@@ -49,5 +49,40 @@ describe('responseDueAt', () => {
   test('a zone east of UTC: the local weekday decides, not the UTC one', () => {
     // Sydney, Mon 2026-06-01 07:30 AEST (UTC+10) is still Sunday in UTC; due 12:00 AEST Monday = 02:00Z.
     expect(due('2026-05-31T21:30:00Z', 'Australia/Sydney')).toBe('2026-06-01T02:00:00.000Z');
+  });
+});
+
+describe('workingMinutesBetween', () => {
+  const between = (from: string, to: string, zone = 'America/Chicago') => workingMinutesBetween(new Date(from), new Date(to), zone);
+
+  test('inside one working day: the plain difference', () => {
+    // Tue 2026-03-03 10:00 → 12:30 CST.
+    expect(between('2026-03-03T16:00:00Z', '2026-03-03T18:30:00Z')).toBe(150);
+  });
+
+  test('evenings, nights and weekends do not count', () => {
+    // Fri 2026-02-27 16:00 CST → Mon 2026-03-02 09:00 CST: 60 min Friday, 60 min Monday.
+    expect(between('2026-02-27T22:00:00Z', '2026-03-02T15:00:00Z')).toBe(120);
+    // Sat 10:00 → Sun 15:00: none.
+    expect(between('2026-02-28T16:00:00Z', '2026-03-01T21:00:00Z')).toBe(0);
+  });
+
+  test('over the change to daylight time the working day is still nine hours', () => {
+    // Fri 2026-03-06 08:00 CST → Mon 2026-03-09 17:00 CDT: two full working days.
+    expect(between('2026-03-06T14:00:00Z', '2026-03-09T22:00:00Z')).toBe(18 * 60);
+  });
+
+  test('the inverse of responseDueAt: an answer at the due time took the target', () => {
+    for (const received of ['2026-03-06T21:00:00Z', '2026-10-23T15:00:00Z', '2026-03-14T16:00:00Z']) {
+      for (const minutes of [30, 240, 600]) {
+        const at = new Date(received);
+        expect(workingMinutesBetween(at, responseDueAt(at, 'Europe/London', minutes), 'Europe/London')).toBeCloseTo(minutes, 6);
+      }
+    }
+  });
+
+  test('no time, or time backwards, is zero', () => {
+    expect(between('2026-03-03T16:00:00Z', '2026-03-03T16:00:00Z')).toBe(0);
+    expect(between('2026-03-03T18:00:00Z', '2026-03-03T16:00:00Z')).toBe(0);
   });
 });

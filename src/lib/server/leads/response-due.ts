@@ -61,3 +61,25 @@ export function responseDueAt(
   }
   throw new RangeError('Response target could not be placed in working time.');
 }
+
+/**
+ * How much working time in `timeZone` lies between two moments, in minutes: the inverse of
+ * `responseDueAt`, so a first contact made exactly at the due time took the target. Zero when
+ * `to` is not after `from`. Used by the owner's report of response times.
+ */
+export function workingMinutesBetween(from: Date, to: Date, timeZone: string, working: WorkingTime = DEFAULT_WORKING_TIME): number {
+  if (working.days.length === 0 || working.endMinute <= working.startMinute) throw new RangeError('Working time has no hours.');
+  const end = to.getTime();
+  let totalMs = 0;
+  let cursor = new TZDate(from.getTime(), timeZone);
+  // One pass per local day; an answer years late still ends (about 370 passes a year).
+  while (cursor.getTime() < end) {
+    if (working.days.includes(cursor.getDay())) {
+      const start = Math.max(cursor.getTime(), atLocalMinute(cursor, working.startMinute, timeZone).getTime());
+      const stop = Math.min(end, atLocalMinute(cursor, working.endMinute, timeZone).getTime());
+      if (stop > start) totalMs += stop - start;
+    }
+    cursor = atLocalMinute(nextLocalDay(cursor, timeZone), 0, timeZone);
+  }
+  return totalMs / MINUTE_MS;
+}
