@@ -335,6 +335,40 @@ const MATRIX: Row[] = [
     json: { visitMinutes: 60, bufferMinutes: 30, stepMinutes: 30, minNoticeMinutes: 1440, horizonDays: 28, onlineBooking: false, timeZone: 'Nowhere/Atall' },
     expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
   },
+  // Setup's own pages and settings: hidden from sales (404). Each body is refused on a field (400),
+  // so no firm's profile, service area, notifications or widget sites change.
+  { route: '/app/setup/profile', method: 'GET', path: () => '/app/setup/profile', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  { route: '/app/setup/service-area', method: 'GET', path: () => '/app/setup/service-area', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  { route: '/app/setup/notifications', method: 'GET', path: () => '/app/setup/notifications', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  { route: '/app/setup/widget', method: 'GET', path: () => '/app/setup/widget', expect: { signedOut: 302, sales: 404, other: 200, owner: 200 } },
+  {
+    route: '/api/app/settings/profile',
+    method: 'PUT',
+    path: () => '/api/app/settings/profile',
+    json: { name: '' },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/settings/service-area',
+    method: 'PUT',
+    path: () => '/api/app/settings/service-area',
+    json: { kind: 'circle' },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/settings/notifications',
+    method: 'PUT',
+    path: () => '/api/app/settings/notifications',
+    json: { extraEmails: ['not an address'], responseTargetMinutes: 60 },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
+  {
+    route: '/api/app/settings/widget',
+    method: 'PUT',
+    path: () => '/api/app/settings/widget',
+    json: { embedOrigins: ['not a site'] },
+    expect: { signedOut: 401, sales: 404, other: 400, owner: 400 },
+  },
   // The Rate book: owners only, and hidden from sales (404, as if the pages did not exist). Opening
   // the draft that the demo firm already has changes nothing; saves and publishes with revision 0 are
   // refused on the field (400), so no caller changes any numbers.

@@ -23,7 +23,7 @@ test('an owner signs in through the browser, lands where they were going, sees t
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('Rate book');
   await expect(page.getByTestId('active-firm')).toHaveText('Cedar Hollow Trim Co.');
   const nav = page.getByRole('navigation', { name: 'Staff area' });
-  await expect(nav.getByRole('link')).toHaveText(['Inquiries', 'Visits', 'Rate book', 'Setup']);
+  await expect(nav.getByRole('link')).toHaveText(['Inquiries', 'Visits', 'Rate book', 'Reports', 'Setup']);
 
   await page.getByRole('button', { name: 'Sign out' }).click();
   await expect(page).toHaveURL(/\/login\?notice=signed-out/);
@@ -32,14 +32,20 @@ test('an owner signs in through the browser, lands where they were going, sees t
   expect(consoleErrors).toEqual([]);
 });
 
-test('a salesperson sees Inquiries and Visits only, and the owner’s pages tell them so', async ({ page }) => {
+test('a salesperson sees Inquiries and Visits only; owner-only pages say so, and the owner’s own areas are not there for them', async ({ page }) => {
   await page.goto('/login');
   await page.getByLabel('E-mail').fill('sam@cedar-hollow.test');
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await expect(page).toHaveURL(/\/app$/);
   await expect(page.getByRole('navigation', { name: 'Staff area' }).getByRole('link')).toHaveText(['Inquiries', 'Visits']);
-  const refused = await page.goto('/app/setup/team');
+  const refused = await page.goto('/app/leads/deleted');
   expect(refused?.status()).toBe(403);
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('This page is for the firm’s owner');
+  // Setup, the Rate book and Reports are the owner's business: for a salesperson there is no such page.
+  for (const path of ['/app/setup/team', '/app/rates', '/app/reports']) {
+    const hidden = await page.goto(path);
+    expect(hidden?.status(), path).toBe(404);
+    await expect(page.getByRole('heading', { level: 1 })).not.toHaveText('This page is for the firm’s owner');
+  }
 });

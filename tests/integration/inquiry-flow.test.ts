@@ -354,7 +354,7 @@ describe('the firm’s reasons for not going ahead', () => {
     const read = (as: Parameters<typeof call>[1]) => call(lostReasonsRoute.GET, as, 'GET', '/api/app/settings/lost-reasons', {});
     const write = (as: Parameters<typeof call>[1], body: unknown) => call(lostReasonsRoute.PUT, as, 'PUT', '/api/app/settings/lost-reasons', {}, body);
     expect((await read(sales)).body.reasons).toEqual([...DEFAULT_LOST_REASONS]);
-    expect(await write(sales, { reasons: ['Price'] })).toMatchObject({ status: 403 });
+    expect(await write(sales, { reasons: ['Price'] })).toMatchObject({ status: 404 });
     expect(await write(owner, { reasons: ['Price', ' price '] })).toMatchObject({
       status: 400,
       body: { fields: { 'reasons.1': 'This reason is already on the list.' } },

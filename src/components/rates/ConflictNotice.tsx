@@ -1,8 +1,7 @@
-import { formatMoney } from '~/lib/estimate';
 import { fieldAt } from '~/lib/shared/rate-book-fields';
-import { fractionToPercent } from '~/lib/shared/rate-book-form';
 import { formatInZone } from '~/lib/shared/time';
 import type { DraftConflict } from './draft-api';
+import { storedText } from './stored-text';
 
 type Props = {
   conflict: DraftConflict;
@@ -12,17 +11,6 @@ type Props = {
   onLoadTheirs: () => void;
   onKeepMine: () => void;
 };
-
-/** A stored value as the owner reads it: money in the currency, fractions as percentages. */
-function storedText(path: string, value: unknown, currency: string, locale: string): string {
-  if (value === undefined || value === null || value === '') return 'empty';
-  const field = fieldAt(path);
-  if (typeof value === 'number' && field?.kind === 'money' && Number.isInteger(value)) return formatMoney(value, currency, locale);
-  if (typeof value === 'number' && field?.kind === 'percent') return `${fractionToPercent(value)} %`;
-  if (typeof value === 'boolean') return value ? 'yes' : 'no';
-  if (typeof value === 'object') return Array.isArray(value) ? `${value.length} rows` : 'changed';
-  return `${String(value)}${field?.unit && field.kind !== 'money' ? ` ${field.unit}` : ''}`;
-}
 
 /**
  * Another owner saved this draft after it was loaded here. Nothing was overwritten: the owner sees

@@ -55,3 +55,62 @@ export function saveDraft(revision: number, data: RateBookInput): Promise<{ revi
       : new RequestFailed(message, status, body.fields ?? {}),
   );
 }
+
+export const RATES_URL = '/api/app/rates';
+export const PREVIEW_URL = '/api/app/rates/draft/preview';
+export const REPLAY_URL = '/api/app/rates/draft/replay';
+
+/** Makes the draft the published version; refused (409) when it was saved again since `revision`. */
+export const publishDraft = (revision: number, note?: string) =>
+  callJson<RateVersionSummary>('POST', `${DRAFT_URL}/publish`, note ? { revision, note } : { revision });
+
+export const discardDraft = (revision: number) => callJson<null>('DELETE', DRAFT_URL, { revision });
+
+/** A new draft copied from an older version (to go back to its numbers). */
+export const startDraftFrom = (fromVersionId: string) => callJson<RateDraft>('POST', DRAFT_URL, { fromVersionId });
+
+/** One project's price under one version, or why that version cannot price it. */
+export type PricedSide = { ok: true; lowCents: number; highCents: number; middleCents: number; minimumApplied: boolean } | { ok: false; reason: string };
+
+export type SamplePreview = {
+  draft: { number: number; revision: number };
+  published: { number: number } | null;
+  rooms: { treatmentId: string; treatmentName: string; description: string; published: PricedSide | null; draft: PricedSide }[];
+};
+
+export type ReplaySummary = {
+  inquiries: number;
+  compared: number;
+  up: number;
+  down: number;
+  same: number;
+  refused: { reference: string; reason: string }[];
+  totalChangeCents: number;
+  medianChangeCents: number;
+  medianChangePercent: number;
+  intoMinimum: string[];
+  outOfMinimum: string[];
+  bands: { label: string; count: number }[];
+  largest: { leadId: string; reference: string; publishedMiddleCents: number; draftMiddleCents: number; changeCents: number; changePercent: number }[];
+};
+
+export type Replay = {
+  id: string;
+  status: 'queued' | 'running' | 'done' | 'failed';
+  done: number;
+  total: number;
+  draftRevision: number;
+  summary: ReplaySummary | null;
+  failure: string | null;
+};
+
+export const startReplay = () => callJson<Replay>('POST', REPLAY_URL);
+
+export type VersionComparison = {
+  before: RateVersionSummary;
+  after: RateVersionSummary;
+  changes: { path: string; before: unknown; after: unknown }[];
+};
+
+export const compareVersions = (before: string, after: string) =>
+  callJson<VersionComparison>('GET', `${RATES_URL}/compare?${new URLSearchParams({ before, after })}`);

@@ -16,6 +16,7 @@ import { RoomsStep } from '../../widget/RoomsStep';
 import { TreatmentStep, type OfferedTreatment } from '../../widget/TreatmentStep';
 import { asRequestFailed, sendJson, type FormStatus } from './api';
 import { StatusLine } from './StatusLine';
+import { useHydrated } from '../../use-hydrated';
 
 type Props = {
   leadId: string;
@@ -34,6 +35,7 @@ type Props = {
 export function MeasuredRooms({ leadId, units, treatments, rooms, visitText, measured, brand, brandText }: Props) {
   const id = useId();
   const [open, setOpen] = useState(false);
+  const hydrated = useHydrated();
   const [draft, setDraft] = useState<Draft>(() => draftFromProject(rooms, units));
   const [showErrors, setShowErrors] = useState(false);
   const [serverFields, setServerFields] = useState<Record<string, string>>({});
@@ -83,7 +85,7 @@ export function MeasuredRooms({ leadId, units, treatments, rooms, visitText, mea
           : 'Enter the rooms as you measured them. They start as the homeowner described them; saving re-prices the inquiry from a site measurement and moves it to Measured.'}
       </p>
       {!open ? (
-        <button type="button" className="button-primary mt-3 px-3 py-1.5" onClick={() => setOpen(true)}>
+        <button type="button" className="button-primary mt-3 px-3 py-1.5" onClick={() => setOpen(true)} disabled={!hydrated}>
           {measured ? 'Correct the measured rooms' : 'Enter the measured rooms'}
         </button>
       ) : (

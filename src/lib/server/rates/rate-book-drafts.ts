@@ -10,6 +10,7 @@
 import { LockMode, UniqueConstraintViolationException } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { rateBookSchema, sampleRateBook, type RateBookInput } from '~/lib/estimate';
+import { DEFAULT_TRIAGE_WEIGHTS } from '~/lib/estimate/schemas.ts';
 import { jsonChanges } from '~/lib/shared/json-changes';
 import type { Envelope } from '../db/versioned-json';
 import { AppError, InvalidInput, NotFound } from '../errors';
@@ -231,7 +232,13 @@ export async function publishDraft(em: EntityManager, editor: RateBookEditor, in
   return summaryOf(version);
 }
 
-/** Two versions of the firm, field by field. */
+/** A version's numbers as the estimate and the triage score use them, every default filled in. */
+function asPriced(data: Envelope<RateBookInput>) {
+  const rates = storedRateBook.read(data);
+  return { ...rates, triage: rates.triage ?? DEFAULT_TRIAGE_WEIGHTS };
+}
+
+/** Two versions of the firm, field by field, as they price. */
 export async function compareVersions(em: EntityManager, companyId: string, beforeId: string, afterId: string) {
   const [before, after] = await Promise.all([
     em.findOne(RateBookVersion, { id: beforeId, company: companyId }),
@@ -241,6 +248,8 @@ export async function compareVersions(em: EntityManager, companyId: string, befo
   return {
     before: summaryOf(before),
     after: summaryOf(after),
-    changes: jsonChanges(inputOf(before.data), inputOf(after.data)),
+    // As the estimate reads them, defaults filled in: a field left out of one version and set to
+    // its default in the other prices the same, so it is no change.
+    changes: jsonChanges(asPriced(before.data), asPriced(after.data)),
   };
 }
