@@ -53,7 +53,8 @@ async function signIn(page: Page) {
 /** Opens the editor and waits until its island has hydrated (it marks the form once its effects run). */
 async function openEditor(page: Page) {
   await page.goto('/app/rates/edit');
-  await expect(page.locator('form[data-ready="true"]')).toBeVisible();
+  // The editor is the largest island (every field, the core's schema): on a busy 2-core machine it hydrates in more than 5 s.
+  await expect(page.locator('form[data-ready="true"]')).toBeVisible({ timeout: 20_000 });
 }
 
 async function ownerPage(browser: Browser): Promise<Page> {

@@ -74,7 +74,8 @@ test('the owner raises the labour rate in a draft, sees what it would do, publis
 
   // Labour from $85 to $120 an hour (Northgate's demo rate, then the raise).
   await page.getByRole('link', { name: 'Edit the draft' }).click();
-  await expect(page.locator('form[data-ready="true"]')).toBeVisible();
+  // The editor is the largest island (every field, the core's schema): on a busy 2-core machine it hydrates in more than 5 s.
+  await expect(page.locator('form[data-ready="true"]')).toBeVisible({ timeout: 20_000 });
   await expect(page.getByLabel('Labour rate')).toHaveValue('85');
   await page.getByLabel('Labour rate').fill('120');
   await page.getByRole('button', { name: 'Save draft' }).click();
